@@ -61,3 +61,11 @@ export function requireEmissivityValue(field: string, value: unknown): number {
 
 /** Stefan–Boltzmann constant, CODATA 2018 exact-derived value, W/(m²·K⁴). */
 export const STEFAN_BOLTZMANN_W_PER_M2_K4 = 5.670374419e-8;
+
+/** Throws unless value is a finite number at or above min (a heat of 0 W or a pressure of 0 torr is allowed). */
+export function requireAtLeast(field: string, value: unknown, min: number, unit = ""): number {
+  if (typeof value !== "number" || !Number.isFinite(value) || value < min) {
+    throw new ThermalInputError(field, value, `a number of at least ${min}${unit ? ` ${unit}` : ""}`);
+  }
+  return value;
+}

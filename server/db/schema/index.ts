@@ -1,0 +1,4 @@
+export * from "./organizations";
+export * from "./users";
+export * from "./tokens";
+export * from "./audit-and-mail";

@@ -1,0 +1,20 @@
+import { startLocalStack } from "./stack";
+
+// Playwright's webServer: its own data folder and ports, a fresh database every run.
+const port = Number(process.env.E2E_PORT ?? 3100);
+const stack = await startLocalStack({
+  dataDir: ".data/e2e-mariadb",
+  port,
+  dbPort: Number(process.env.E2E_DB_PORT ?? 3327),
+  smtpPort: Number(process.env.E2E_SMTP_PORT ?? 2545),
+  database: "frostfold_e2e",
+  freshDatabase: true,
+  log: (line) => console.log(`[e2e] ${line}`),
+});
+console.log(`[e2e] serving ${stack.origin}`);
+const stop = async () => {
+  await stack.stop();
+  process.exit(0);
+};
+process.on("SIGINT", stop);
+process.on("SIGTERM", stop);

@@ -1,0 +1,21 @@
+import { Router } from "express";
+import { notFound } from "../errors";
+import type { ServiceContext } from "../services/context";
+import { authRouter } from "./auth";
+import { healthRouter } from "./health";
+import { outboxRouter } from "./outbox";
+import { invitationsRouter, teamRouter } from "./team";
+
+/** Every router under /api. */
+export function apiRouter(ctx: ServiceContext): Router {
+  const api = Router();
+  api.use("/health", healthRouter(ctx));
+  api.use("/auth", authRouter(ctx));
+  api.use("/team", teamRouter(ctx));
+  api.use("/invitations", invitationsRouter(ctx));
+  api.use("/outbox", outboxRouter(ctx));
+  api.use(() => {
+    throw notFound("API route");
+  });
+  return api;
+}

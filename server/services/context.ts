@@ -1,0 +1,24 @@
+import type { Db } from "../db/client";
+import type { SessionStore } from "../db/repositories/sessions";
+import type { Env } from "../env";
+import type { Logger } from "../logger";
+import type { OutboxSender } from "../mail/outbox-sender";
+import type { Role } from "../../shared/permissions";
+
+/** What every use case may reach. Built once in createApp; tests build their own. */
+export interface ServiceContext {
+  db: Db;
+  env: Env;
+  logger: Logger;
+  sessions: SessionStore;
+  outbox: OutboxSender;
+  clock: () => Date;
+}
+
+/** The signed-in caller, from the session middleware. */
+export interface Actor {
+  userId: string;
+  organizationId: string;
+  role: Role;
+  sessionId: string;
+}

@@ -1,0 +1,36 @@
+/**
+ * Every client URL, once. Screens link with getHref() so a renamed path changes in one place.
+ * The two e-mail paths (accept invitation, reset confirm) are fixed by the server's mail
+ * templates: change them only together with the server.
+ */
+
+/** Only same-site paths may be used as a "next" target, so a crafted link cannot send a user away. */
+export function safeNext(next: string | null | undefined): string {
+  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return "/";
+  return next;
+}
+
+export const paths = {
+  auth: {
+    signIn: {
+      path: "/sign-in",
+      getHref: (next?: string) =>
+        next && safeNext(next) !== "/" ? `/sign-in?next=${encodeURIComponent(next)}` : "/sign-in",
+    },
+    createAccount: { path: "/create-account", getHref: () => "/create-account" },
+    resetPassword: { path: "/reset-password", getHref: () => "/reset-password" },
+    resetPasswordConfirm: {
+      path: "/reset-password/confirm",
+      getHref: (token: string) => `/reset-password/confirm?token=${encodeURIComponent(token)}`,
+    },
+    acceptInvitation: {
+      path: "/invitations/accept",
+      getHref: (token: string) => `/invitations/accept?token=${encodeURIComponent(token)}`,
+    },
+  },
+  app: {
+    overview: { path: "/", getHref: () => "/" },
+    team: { path: "/team", getHref: () => "/team" },
+    outbox: { path: "/outbox", getHref: () => "/outbox" },
+  },
+} as const;

@@ -1,0 +1,6 @@
+/** Every auth query key, prefix first, so sign-out can drop the whole ["auth"] branch at once. */
+export const authKeys = {
+  all: ["auth"] as const,
+  me: () => [...authKeys.all, "me"] as const,
+  invitation: (token: string) => [...authKeys.all, "invitation", token] as const,
+};
