@@ -14,8 +14,17 @@ export function buildContext(env: Env): { ctx: ServiceContext; close: () => Prom
   const logger = createLogger(env.LOG_LEVEL);
   const { db, pool } = createDb(env.DATABASE_URL);
   const transport = createMailTransport(env);
-  const outbox = createOutboxSender({ db, transport, from: env.MAIL_FROM, logger });
-  const ctx: ServiceContext = { db, env, logger, sessions: createSessionStore(db, cookieSecure(env)), outbox, clock: () => new Date() };
+  const ctx: ServiceContext = {
+    db,
+    env,
+    logger,
+    sessions: createSessionStore(db, cookieSecure(env)),
+    outbox: undefined as unknown as ServiceContext["outbox"],
+    clock: () => new Date(),
+  };
+  // The sender reads the context's clock each time, so a test that moves the clock moves it too.
+  const outbox = createOutboxSender({ db, transport, from: env.MAIL_FROM, logger, clock: () => ctx.clock() });
+  ctx.outbox = outbox;
   return {
     ctx,
     async close() {

@@ -83,7 +83,9 @@ export async function startLocalMariaDb(options: { dataDir: string; port: number
       if (exited) return;
       // mariadb-admin shutdown returns before the process exits, so wait on the process too.
       await run("mariadb-admin", ["--no-defaults", `--socket=${socket}`, "-uroot", "shutdown"]).catch(() => child.kill("SIGTERM"));
-      await Promise.race([exitPromise, new Promise((r) => setTimeout(r, 15_000))]);
+      let timer: NodeJS.Timeout | undefined;
+      await Promise.race([exitPromise, new Promise((r) => (timer = setTimeout(r, 15_000)))]);
+      clearTimeout(timer);
       if (!exited) child.kill("SIGKILL");
     },
   };

@@ -1,5 +1,6 @@
 import { ThermalConvergenceError } from "./convergence-error";
-import { Emissivity, evaluateEmissivity, isConstantEmissivity, validateEmissivity } from "./emissivity";
+import { solveChain } from "./chain-solve";
+import { Emissivity, emissivitySlope, evaluateEmissivity, isConstantModel, validateEmissivity } from "./emissivity";
 import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA, ThermalInputError, requireAbove } from "./errors";
 import { StackGeometry, stackNodes } from "./stack-geometry";
 
@@ -46,9 +47,8 @@ export interface StackResult {
 }
 
 export const MAX_SHIELDS = 1000;
-const MAX_ITERATIONS = 500;
-// Tighter than the promised 1e-9 so the linear (fixed-point) convergence leaves margin.
-const RELATIVE_TOLERANCE = 1e-11;
+// Shield temperatures from the final linear solve and from the iteration must agree this well.
+const AGREEMENT = 1e-9;
 
 /**
  * Heat leak through a stack of gray, diffuse, opaque shields in vacuum: every face adds a
@@ -60,41 +60,44 @@ const RELATIVE_TOLERANCE = 1e-11;
 export function estimateStack(input: StackInput): StackResult {
   const { nodes, shields, warmEpsilon, coldEpsilon, tw, tc } = validateStack(input);
   const n = shields.length;
-  const areas = nodes.areas_m2;
-  const network = new Network(n, areas, warmEpsilon, coldEpsilon, tw, tc);
-  const warmModels = shields.map((s) => s.warmSide);
-  const coldModels = shields.map((s) => s.coldSide);
-  const varying = shields.some((s) => !isConstantEmissivity(s.warmSide) || !isConstantEmissivity(s.coldSide));
-
-  // Start from T⁴ falling evenly across the shields (exact for equal emissivities, planar).
-  const t = new Float64Array(n);
-  const ew = SIGMA * tw ** 4;
-  const ec = SIGMA * tc ** 4;
-  for (let k = 1; k <= n; k++) t[k - 1] = Math.sqrt(Math.sqrt((ec + ((ew - ec) * (n + 1 - k)) / (n + 1)) / SIGMA));
-
-  let iterations = 0;
-  let relaxation = 1;
-  let previousStep = Infinity;
-  for (;;) {
-    iterations++;
-    const epsilonChange = network.setShieldEmissivities(warmModels, coldModels, t, iterations > 1);
-    network.solve();
-    if (!varying) break;
-    // Fixed point on the shield temperatures, damped whenever a step fails to shrink.
-    let step = 0;
-    for (let k = 0; k < n; k++) {
-      const change = Math.abs(network.shieldT[k] - t[k]) / t[k];
-      if (change > step) step = change;
-    }
-    if (step < RELATIVE_TOLERANCE && epsilonChange < RELATIVE_TOLERANCE) break;
-    if (iterations >= MAX_ITERATIONS) {
-      throw new ThermalConvergenceError("Shield temperatures with temperature-dependent emissivity", iterations, Math.max(step, epsilonChange));
-    }
-    if (step >= previousStep) relaxation = Math.max(relaxation * 0.5, 1 / 64);
-    previousStep = step;
-    for (let k = 0; k < n; k++) t[k] += relaxation * (network.shieldT[k] - t[k]);
+  const warmModels: Emissivity[] = [];
+  const coldModels: Emissivity[] = [];
+  let varying = false;
+  for (const shield of shields) {
+    warmModels.push(shield.warmSide);
+    coldModels.push(shield.coldSide);
+    if (!isConstantModel(shield.warmSide) || !isConstantModel(shield.coldSide)) varying = true;
   }
+  const network = new Network(nodes.areas_m2, warmModels, coldModels, warmEpsilon, coldEpsilon, tw, tc);
+  // Start from T⁴ falling evenly across the shields (exact for equal emissivities, planar).
+  const t = zeros(n + 2);
+  t[0] = tw;
+  t[n + 1] = tc;
+  const ew = SIGMA * tw * tw * tw * tw;
+  const ec = SIGMA * tc * tc * tc * tc;
+  for (let k = 1; k <= n; k++) t[k] = Math.sqrt(Math.sqrt((ec + ((ew - ec) * (n + 1 - k)) / (n + 1)) / SIGMA));
+  let iterations = 1;
+  if (varying) {
+    // Temperatures and emissivities together: Newton on the chain r_k = q_{k−1} − q_k, then
+    // one last linear solve with ε at the converged temperatures, which must reproduce them.
+    iterations += solveChain(t, network.gaps, "Shield temperatures with temperature-dependent emissivity");
+  }
+  network.setShieldEmissivities(t);
+  network.solve();
+  if (varying) checkAgreement(network.shieldT, t, iterations);
   return network.result(nodes.radii_m, iterations);
+}
+
+function checkAgreement(linear: number[], newton: number[], iterations: number): void {
+  let worst = 0;
+  for (let k = 0; k < linear.length; k++) worst = Math.max(worst, Math.abs(linear[k] - newton[k + 1]) / newton[k + 1]);
+  if (!(worst <= AGREEMENT)) {
+    throw new ThermalConvergenceError("Shield temperatures with temperature-dependent emissivity", iterations, worst);
+  }
+}
+
+function zeros(n: number): number[] {
+  return new Array<number>(n).fill(0);
 }
 
 function validateStack(input: StackInput) {
@@ -119,54 +122,76 @@ function validateStack(input: StackInput) {
   return { nodes, shields, warmEpsilon, coldEpsilon, tw, tc };
 }
 
-/** The series network with preallocated arrays, so the fixed-point loop allocates nothing. */
+/** The series network with preallocated arrays, so the iteration allocates nothing. */
 class Network {
-  readonly shieldT: Float64Array;
-  private readonly warmFace: Float64Array; // surface resistance of each shield's warm face
-  private readonly coldFace: Float64Array;
-  private readonly space: Float64Array; // gap g lies between node g and node g + 1
-  private readonly epsWarm: Float64Array;
-  private readonly epsCold: Float64Array;
+  readonly shieldT: number[];
+  private readonly n: number;
+  private readonly warmFace: number[]; // surface resistance of each shield's warm face
+  private readonly coldFace: number[];
+  private readonly space: number[]; // gap g lies between node g and node g + 1
+  private readonly dWarmFace: number[]; // d(warm-face resistance)/dT of each shield
+  private readonly dColdFace: number[];
   private readonly warmWall: number;
   private readonly coldWall: number;
   private heat_W = 0;
   private total = 0;
 
   constructor(
-    private readonly n: number,
-    private readonly areas: Float64Array,
+    private readonly areas: number[],
+    private readonly warmModels: Emissivity[],
+    private readonly coldModels: Emissivity[],
     warmEpsilon: number,
     coldEpsilon: number,
     private readonly tw: number,
     private readonly tc: number,
   ) {
-    this.shieldT = new Float64Array(n);
-    this.warmFace = new Float64Array(n);
-    this.coldFace = new Float64Array(n);
-    this.epsWarm = new Float64Array(n);
-    this.epsCold = new Float64Array(n);
-    this.space = new Float64Array(n + 1);
+    const n = warmModels.length;
+    this.n = n;
+    this.shieldT = zeros(n);
+    this.warmFace = zeros(n);
+    this.coldFace = zeros(n);
+    this.dWarmFace = zeros(n);
+    this.dColdFace = zeros(n);
+    this.space = zeros(n + 1);
     // The inner (colder) surface of each concentric pair sees the outer one entirely: F = 1.
     for (let g = 0; g <= n; g++) this.space[g] = 1 / areas[g + 1];
     this.warmWall = (1 - warmEpsilon) / (warmEpsilon * areas[0]);
     this.coldWall = (1 - coldEpsilon) / (coldEpsilon * areas[n + 1]);
   }
 
-  /** Evaluates every shield face at its temperature; returns the largest relative change of ε. */
-  setShieldEmissivities(warm: Emissivity[], cold: Emissivity[], t: Float64Array, compare: boolean): number {
-    let change = 0;
+  /** Face resistances (1 − ε)/(εA) at the node temperatures t[1…n], and their dR/dT = −ε′/(ε²A). */
+  setShieldEmissivities(t: number[]): void {
     for (let k = 0; k < this.n; k++) {
-      const ew = evaluateEmissivity(warm[k], t[k]);
-      const ec = evaluateEmissivity(cold[k], t[k]);
-      if (compare) change = Math.max(change, Math.abs(ew - this.epsWarm[k]) / ew, Math.abs(ec - this.epsCold[k]) / ec);
-      this.epsWarm[k] = ew;
-      this.epsCold[k] = ec;
+      const temperature_K = t[k + 1];
       const area = this.areas[k + 1];
+      const ew = evaluateEmissivity(this.warmModels[k], temperature_K);
+      const ec = evaluateEmissivity(this.coldModels[k], temperature_K);
       this.warmFace[k] = (1 - ew) / (ew * area);
       this.coldFace[k] = (1 - ec) / (ec * area);
+      this.dWarmFace[k] = -emissivitySlope(this.warmModels[k], temperature_K) / (ew * ew * area);
+      this.dColdFace[k] = -emissivitySlope(this.coldModels[k], temperature_K) / (ec * ec * area);
     }
-    return change;
   }
+
+  /** Heat σ(T_g⁴ − T_{g+1}⁴)/R_g through every gap with its face resistances, for solveChain. */
+  readonly gaps = (t: number[], q: number[], dqdWarm: number[], dqdCold: number[]): void => {
+    this.setShieldEmissivities(t);
+    const n = this.n;
+    for (let g = 0; g <= n; g++) {
+      const a = t[g];
+      const b = t[g + 1];
+      const upper = g === 0 ? this.warmWall : this.coldFace[g - 1];
+      const lower = g === n ? this.coldWall : this.warmFace[g];
+      const dUpper = g === 0 ? 0 : this.dColdFace[g - 1];
+      const dLower = g === n ? 0 : this.dWarmFace[g];
+      const r = upper + this.space[g] + lower;
+      // a⁴ − b⁴ factored, so a thousand nearly equal neighbours do not cancel digits away.
+      const heat = (SIGMA * (a - b) * (a + b) * (a * a + b * b)) / r;
+      q[g] = heat;
+      dqdWarm[g] = (4 * SIGMA * a * a * a - heat * dUpper) / r;
+      dqdCold[g] = (-4 * SIGMA * b * b * b - heat * dLower) / r;
+    }
+  };
 
   /** Heat from σ(T_w⁴ − T_c⁴)/ΣR; each shield's σT⁴ from the drop across the resistances below it. */
   solve(): void {
@@ -175,36 +200,39 @@ class Network {
     for (let g = 0; g <= n; g++) total += this.space[g];
     for (let k = 0; k < n; k++) total += this.warmFace[k] + this.coldFace[k];
     this.total = total;
-    const ec = SIGMA * this.tc ** 4;
-    this.heat_W = (SIGMA * this.tw ** 4 - ec) / total;
+    const tc = this.tc;
+    const tw = this.tw;
+    const ec = SIGMA * tc * tc * tc * tc;
+    this.heat_W = (SIGMA * tw * tw * tw * tw - ec) / total;
     // March from the cold wall up: E_k = E_c + Q·(resistance between shield k and the cold wall).
     // Every term is positive, so no cancellation even for a 4 K wall under a 300 K one.
     let below = this.coldWall;
     for (let k = n - 1; k >= 0; k--) {
       below += this.space[k + 1] + this.coldFace[k];
       this.shieldT[k] = Math.sqrt(Math.sqrt((ec + this.heat_W * below) / SIGMA));
+      below += this.warmFace[k];
     }
   }
 
-  result(radii_m: Float64Array, iterations: number): StackResult {
+  result(radii_m: number[], iterations: number): StackResult {
     const n = this.n;
-    const resistances: StackResistance[] = [];
-    const add = (kind: StackResistance["kind"], label: string, value: number) =>
-      resistances.push({ kind, label, value, share: value / this.total });
-    add("surface", "warm wall surface", this.warmWall);
+    const total = this.total;
+    const labels = labelsFor(n);
+    const resistances: StackResistance[] = [surface(labels[0], this.warmWall, total)];
     for (let g = 0; g <= n; g++) {
-      add("space", `gap ${g + 1} space`, this.space[g]);
+      resistances.push(space(labels[3 * g + 1], this.space[g], total));
       if (g < n) {
-        add("surface", `shield ${g + 1} warm face`, this.warmFace[g]);
-        add("surface", `shield ${g + 1} cold face`, this.coldFace[g]);
+        resistances.push(surface(labels[3 * g + 2], this.warmFace[g], total));
+        resistances.push(surface(labels[3 * g + 3], this.coldFace[g], total));
       }
     }
-    add("surface", "cold wall surface", this.coldWall);
-    const shields = Array.from(this.shieldT, (temperature_K, k) =>
-      radii_m.length > 0
-        ? { temperature_K, radius_m: radii_m[k + 1], area_m2: this.areas[k + 1] }
-        : { temperature_K, area_m2: this.areas[k + 1] },
-    );
+    resistances.push(surface(labels[3 * n + 2], this.coldWall, total));
+    const shields: StackResult["shields"] = [];
+    for (let k = 0; k < n; k++) {
+      const temperature_K = this.shieldT[k];
+      const area_m2 = this.areas[k + 1];
+      shields.push(radii_m.length > 0 ? { temperature_K, radius_m: radii_m[k + 1], area_m2 } : { temperature_K, area_m2 });
+    }
     return {
       heatLeak_W: this.heat_W,
       heatFlux_W_per_m2: this.heat_W / this.areas[n + 1],
@@ -213,4 +241,28 @@ class Network {
       iterations,
     };
   }
+}
+
+function surface(label: string, value: number, total: number): StackResistance {
+  return { kind: "surface", label, value, share: value / total };
+}
+
+function space(label: string, value: number, total: number): StackResistance {
+  return { kind: "space", label, value, share: value / total };
+}
+
+// Resistance labels in ladder order, built once per shield count and reused: a 60-shield
+// stack would otherwise spend a third of its time formatting strings.
+const labelCache = new Map<number, string[]>();
+function labelsFor(n: number): string[] {
+  let labels = labelCache.get(n);
+  if (labels) return labels;
+  labels = ["warm wall surface"];
+  for (let g = 1; g <= n + 1; g++) {
+    labels.push(`gap ${g} space`);
+    if (g <= n) labels.push(`shield ${g} warm face`, `shield ${g} cold face`);
+  }
+  labels.push("cold wall surface");
+  if (labelCache.size < 64) labelCache.set(n, labels);
+  return labels;
 }

@@ -8,9 +8,9 @@ export type StackGeometry =
 
 /** Surfaces of a stack, node 0 = warm wall, 1…N = shields warm → cold, N + 1 = cold wall. */
 export interface StackNodes {
-  areas_m2: Float64Array;
+  areas_m2: number[];
   /** Radii in the same order; empty for planar stacks. */
-  radii_m: Float64Array;
+  radii_m: number[];
 }
 
 /**
@@ -23,7 +23,7 @@ export function stackNodes(geometry: StackGeometry, shieldRadii_m: (number | und
     throw new ThermalInputError("geometry", geometry, 'an object with kind "planar", "cylinder" or "sphere"');
   }
   const n = shieldRadii_m.length;
-  const areas_m2 = new Float64Array(n + 2);
+  const areas_m2 = new Array<number>(n + 2).fill(0);
   if (geometry.kind === "planar") {
     const area_m2 = requireAbove("geometry.area_m2", geometry.area_m2, 0, "m²");
     shieldRadii_m.forEach((radius_m, i) => {
@@ -32,7 +32,7 @@ export function stackNodes(geometry: StackGeometry, shieldRadii_m: (number | und
       }
     });
     areas_m2.fill(area_m2);
-    return { areas_m2, radii_m: new Float64Array(0) };
+    return { areas_m2, radii_m: [] };
   }
   if (geometry.kind !== "cylinder" && geometry.kind !== "sphere") {
     throw new ThermalInputError("geometry.kind", (geometry as { kind?: unknown }).kind, '"planar", "cylinder" or "sphere"');
@@ -47,7 +47,7 @@ export function stackNodes(geometry: StackGeometry, shieldRadii_m: (number | und
     );
   }
   const length_m = geometry.kind === "cylinder" ? requireAbove("geometry.length_m", geometry.length_m, 0, "m") : 0;
-  const radii_m = new Float64Array(n + 2);
+  const radii_m = new Array<number>(n + 2).fill(0);
   radii_m[0] = warm_m;
   radii_m[n + 1] = cold_m;
   for (let k = 1; k <= n; k++) {

@@ -12,6 +12,7 @@ type AppLayoutProps = {
   user: { name: string; organization: string; role: string };
   onSignOut: () => void;
   signingOut: boolean;
+  signOutError?: string | null;
   children: ReactNode;
 };
 
@@ -21,7 +22,7 @@ const itemBase = "flex items-center justify-between rounded-md px-3 py-2 text-sm
  * The signed-in frame: a left rail (a top block on narrow screens) with the mark, the screens
  * and who is signed in. It knows nothing of permissions: the route decides which items exist.
  */
-export function AppLayout({ nav, user, onSignOut, signingOut, children }: AppLayoutProps) {
+export function AppLayout({ nav, user, onSignOut, signingOut, signOutError, children }: AppLayoutProps) {
   return (
     <div className="flex min-h-screen flex-col md:flex-row">
       <a href="#main" className="sr-only rounded-md bg-frost-400 px-3 py-2 text-ink-950 focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-10">
@@ -66,6 +67,11 @@ export function AppLayout({ nav, user, onSignOut, signingOut, children }: AppLay
           <Button variant="secondary" size="sm" onClick={onSignOut} busy={signingOut}>
             Sign out
           </Button>
+          {signOutError ? (
+            <p role="alert" className="text-xs text-fault-300">
+              Sign-out failed: {signOutError}
+            </p>
+          ) : null}
         </section>
       </aside>
       <div className="flex min-w-0 flex-1 flex-col">

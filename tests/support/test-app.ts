@@ -1,0 +1,84 @@
+import type { Server } from "node:http";
+import supertest from "supertest";
+import { inject } from "vitest";
+import { createApp } from "../../server/app";
+import { buildContext } from "../../server/bootstrap";
+import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from "../../server/db/seed/demo";
+import { parseEnv } from "../../server/env";
+import { newId } from "../../server/ids";
+import { startSmtpFake, type SmtpFake } from "../../server/mail/smtp-fake";
+import { hashPassword } from "../../server/services/passwords";
+import type { Role } from "../../shared/permissions";
+import { resetDatabase } from "./database";
+
+export const TEST_ORIGIN = "http://frostfold.test";
+
+/**
+ * The real app in-process on port 0, against the test MariaDB, with its own SMTP fake.
+ * `agent()` is a cookie-keeping client that sends our Origin like a browser on our page would.
+ */
+export async function startTestApp(envOverrides: Record<string, string> = {}) {
+  const smtp: SmtpFake = await startSmtpFake(0);
+  const env = parseEnv({
+    NODE_ENV: "test",
+    DATABASE_URL: inject("databaseUrl"),
+    APP_ORIGIN: TEST_ORIGIN,
+    MAIL_MODE: "local",
+    SMTP_PORT: String(smtp.port),
+    LOG_LEVEL: "silent",
+    SIGN_IN_LIMIT_PER_IP: "10000",
+    SIGN_IN_LIMIT_PER_EMAIL: "10000",
+    CLIENT_DIST: "does-not-exist",
+    COOKIE_SECURE: "false",
+    ...envOverrides,
+  });
+  const { ctx, close } = buildContext(env);
+  const server: Server = await new Promise((resolve) => {
+    const s = createApp(ctx).listen(0, "127.0.0.1", () => resolve(s));
+  });
+
+  const agent = () => supertest.agent(server).set("Origin", TEST_ORIGIN);
+
+  return {
+    ctx,
+    smtp,
+    server,
+    agent,
+    /** Empties every table and seeds the demo organization again. */
+    async reset() {
+      // Let mail queued by the previous test land first, so it cannot be mistaken for this test's.
+      await ctx.outbox.flush();
+      await resetDatabase(ctx.db);
+      smtp.clear();
+      await seedDemo(ctx.db, { hashPassword, newId, now: new Date() });
+    },
+    async signInAs(role: Role) {
+      const a = agent();
+      const user = DEMO_USERS.find((u) => u.role === role)!;
+      const res = await a.post("/api/auth/sign-in").send({ email: user.email, password: DEMO_PASSWORD });
+      if (res.status !== 200) throw new Error(`could not sign in as ${role}: ${res.status} ${JSON.stringify(res.body)}`);
+      return a;
+    },
+    /** A second, unrelated organization with its own owner, signed in. */
+    async signUpOtherOrganization(email = "owner@otherlab.example") {
+      const a = agent();
+      const res = await a.post("/api/auth/sign-up").send({ name: "Other Owner", email, password: "other-lab-password", organizationName: "Other Lab" });
+      if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
+      return { agent: a, me: res.body };
+    },
+    async stop() {
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      await close();
+      await smtp.stop();
+    },
+  };
+}
+export type TestApp = Awaited<ReturnType<typeof startTestApp>>;
+
+/** The first link in a caught message's text. */
+export function linkIn(text: string, path: string): string {
+  const match = text.match(new RegExp(`https?://[^\\s]+${path.replace(/[/?]/g, "\\$&")}[^\\s]*`));
+  if (!match) throw new Error(`no ${path} link in:\n${text}`);
+  return match[0];
+}
+export const tokenOf = (link: string) => new URL(link).searchParams.get("token") ?? "";
