@@ -15,7 +15,6 @@ export default defineConfig({
   test: {
     projects: [
       {
-        extends: false,
         test: {
           name: "shared",
           include: ["shared/**/*.test.ts"],
@@ -24,7 +23,6 @@ export default defineConfig({
         },
       },
       {
-        extends: false,
         test: {
           name: "server",
           include: ["tests/api/**/*.test.ts", "server/**/*.test.ts"],

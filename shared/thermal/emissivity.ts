@@ -112,15 +112,12 @@ function interpolateTable(points: [number, number][], temperature_K: number): nu
 
 /**
  * dε/dT of a validated model, for the Newton solvers: n·ε/T on the power law (0 where it is
- * capped at 1), the segment slope inside a table, 0 outside it and for constants.
+ * capped at 1), the segment slope inside a table, 0 outside it and for constants. Pass the
+ * emissivity at this temperature as `value` when it is already known, to skip a second power.
  */
-export function emissivitySlope(model: Emissivity, temperature_K: number): number {
+export function emissivitySlope(model: Emissivity, temperature_K: number, value = evaluateEmissivity(model, temperature_K)): number {
   if (typeof model === "number") return 0;
-  if (model.kind === "power") {
-    if (model.exponent === 0) return 0;
-    const value = evaluateEmissivity(model, temperature_K);
-    return value < 1 ? (model.exponent * value) / temperature_K : 0;
-  }
+  if (model.kind === "power") return value < 1 ? (model.exponent * value) / temperature_K : 0;
   const points = model.points;
   const last = points.length - 1;
   if (last === 0 || temperature_K < points[0][0] || temperature_K >= points[last][0]) return 0;

@@ -36,8 +36,8 @@ export interface RateFit {
 /**
  * Ordinary least squares of value on time over the window (inclusive). Standard error of the
  * slope s/√Sxx with s² = Σe²/(n − 2); 95 % interval slope ± t(0.975, n − 2)·SE (NIST/SEMATECH
- * e-Handbook of Statistical Methods, §4.1.4.1 and §4.5.2.x; Montgomery & Runger, Applied
- * Statistics and Probability for Engineers, ch. 11). Logger noise is often correlated in time,
+ * e-Handbook of Statistical Methods, §4.1.4.1; Montgomery & Runger, Applied Statistics and
+ * Probability for Engineers, ch. 11, from memory). Logger noise is often correlated in time,
  * which makes this SE optimistic; we say so in the UI rather than guess a correction.
  */
 export function fitRate(

@@ -49,6 +49,7 @@ export interface StackResult {
 export const MAX_SHIELDS = 1000;
 // Shield temperatures from the final linear solve and from the iteration must agree this well.
 const AGREEMENT = 1e-9;
+const WARM_UP_PASSES = 2;
 
 /**
  * Heat leak through a stack of gray, diffuse, opaque shields in vacuum: every face adds a
@@ -78,9 +79,16 @@ export function estimateStack(input: StackInput): StackResult {
   for (let k = 1; k <= n; k++) t[k] = Math.sqrt(Math.sqrt((ec + ((ew - ec) * (n + 1 - k)) / (n + 1)) / SIGMA));
   let iterations = 1;
   if (varying) {
-    // Temperatures and emissivities together: Newton on the chain r_k = q_{k−1} − q_k, then
-    // one last linear solve with ε at the converged temperatures, which must reproduce them.
-    iterations += solveChain(t, network.gaps, "Shield temperatures with temperature-dependent emissivity");
+    // Temperatures and emissivities together. Two plain substitutions (ε at the current
+    // temperatures, then the linear network for new ones) give Newton a close start; Newton
+    // on the chain r_k = q_{k−1} − q_k finishes; a last linear solve with ε at the converged
+    // temperatures must reproduce them.
+    for (let pass = 0; pass < WARM_UP_PASSES; pass++) {
+      network.setShieldEmissivities(t);
+      network.solve();
+      for (let k = 0; k < n; k++) t[k + 1] = network.shieldT[k];
+    }
+    iterations += WARM_UP_PASSES + solveChain(t, network.gaps, "Shield temperatures with temperature-dependent emissivity");
   }
   network.setShieldEmissivities(t);
   network.solve();
@@ -168,8 +176,8 @@ class Network {
       const ec = evaluateEmissivity(this.coldModels[k], temperature_K);
       this.warmFace[k] = (1 - ew) / (ew * area);
       this.coldFace[k] = (1 - ec) / (ec * area);
-      this.dWarmFace[k] = -emissivitySlope(this.warmModels[k], temperature_K) / (ew * ew * area);
-      this.dColdFace[k] = -emissivitySlope(this.coldModels[k], temperature_K) / (ec * ec * area);
+      this.dWarmFace[k] = -emissivitySlope(this.warmModels[k], temperature_K, ew) / (ew * ew * area);
+      this.dColdFace[k] = -emissivitySlope(this.coldModels[k], temperature_K, ec) / (ec * ec * area);
     }
   }
 

@@ -3,15 +3,22 @@ import { isApiError } from "./api-client";
 
 /**
  * Puts the server's per-field issues beside the inputs that failed, keeping what the user typed.
- * Returns the message for the form as a whole (issues on unknown fields, or the error itself),
- * or null when every issue found its field.
+ * codeFields names the field a field-less error is about (a 409 "email_taken" is about the
+ * e-mail). Returns the message for the form as a whole (issues on unknown fields, or the error
+ * itself), or null when every issue found its field.
  */
 export function applyServerErrors<T extends FieldValues>(
   error: unknown,
   setError: UseFormSetError<T>,
   fieldNames: readonly Path<T>[],
+  codeFields: Partial<Record<string, Path<T>>> = {},
 ): string | null {
   if (!isApiError(error)) return "Something went wrong. Try again.";
+  const fieldForCode = codeFields[error.code];
+  if (error.fields.length === 0 && fieldForCode) {
+    setError(fieldForCode, { type: "server", message: error.message }, { shouldFocus: true });
+    return null;
+  }
   const leftOver: string[] = [];
   let first = true;
   for (const issue of error.fields) {

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { MeSchema } from "../../../../shared/schemas/auth";
 import type { AcceptInvitationInput } from "../../../../shared/schemas/team";
 import { apiRequest } from "../../../lib/api-client";
-import { authKeys } from "./auth-keys";
+import { startSession } from "./start-session";
 
 export const acceptInvitation = (input: AcceptInvitationInput) =>
   apiRequest("POST", "/invitations/accept", { body: input, schema: MeSchema });
@@ -15,9 +15,6 @@ export function useAcceptInvitation() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: acceptInvitation,
-    onSuccess: (me) => {
-      queryClient.removeQueries();
-      queryClient.setQueryData(authKeys.me(), me);
-    },
+    onSuccess: (me) => startSession(queryClient, me),
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { MeSchema, type SignInInput } from "../../../../shared/schemas/auth";
 import { apiRequest } from "../../../lib/api-client";
-import { authKeys } from "./auth-keys";
+import { startSession } from "./start-session";
 
 export const signIn = (input: SignInInput) => apiRequest("POST", "/auth/sign-in", { body: input, schema: MeSchema });
 
@@ -10,10 +10,6 @@ export function useSignIn() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: signIn,
-    onSuccess: (me) => {
-      // Nothing cached for a previous user of this browser may leak into the new session.
-      queryClient.removeQueries();
-      queryClient.setQueryData(authKeys.me(), me);
-    },
+    onSuccess: (me) => startSession(queryClient, me),
   });
 }

@@ -27,7 +27,7 @@ export function CreateAccountForm({ onCreated }: { onCreated: (me: Me) => void }
     try {
       onCreated(await signUp.mutateAsync(values));
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, ["name", "email", "organizationName", "password"]));
+      setFormError(applyServerErrors(error, setError, ["name", "email", "organizationName", "password"], { email_taken: "email" }));
     }
   });
 

@@ -5,8 +5,9 @@ import { teamKeys } from "./team-keys";
 
 export const getTeam = (signal?: AbortSignal) => apiRequest("GET", "/team/members", { schema: TeamSchema, signal });
 
-// Members and invitations come in one answer, so one key covers both lists.
+// Members and invitations come in one answer, so one key covers both lists. Stale at once:
+// other owners and invitees change the team from other browsers, and each visit should show it.
 export const teamQueryOptions = () =>
-  queryOptions({ queryKey: teamKeys.overview(), queryFn: ({ signal }) => getTeam(signal), staleTime: 30_000 });
+  queryOptions({ queryKey: teamKeys.overview(), queryFn: ({ signal }) => getTeam(signal), staleTime: 0 });
 
 export const useTeam = () => useQuery(teamQueryOptions());

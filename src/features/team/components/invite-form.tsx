@@ -7,7 +7,6 @@ import { InviteInputSchema } from "../../../../shared/schemas/team";
 import { Button } from "../../../components/ui/button";
 import { Callout } from "../../../components/ui/callout";
 import { SelectField, TextField } from "../../../components/ui/field";
-import { isApiError } from "../../../lib/api-client";
 import { applyServerErrors } from "../../../lib/form-errors";
 import { useInviteMember } from "../api/invite-member";
 import { ROLE_LABELS, ROLE_SUMMARIES } from "./role-text";
@@ -35,11 +34,7 @@ export function InviteForm({ onInvited, sentNote }: { onInvited?: () => unknown;
       reset({ email: "", role: values.role });
     } catch (error) {
       // "Already a member" is about the address, so it belongs beside the e-mail field.
-      if (isApiError(error, "already_member") && error.fields.length === 0) {
-        setError("email", { type: "server", message: error.message }, { shouldFocus: true });
-        return;
-      }
-      setFormError(applyServerErrors(error, setError, ["email", "role"]));
+      setFormError(applyServerErrors(error, setError, ["email", "role"], { already_member: "email" }));
     }
   });
 
@@ -53,7 +48,7 @@ export function InviteForm({ onInvited, sentNote }: { onInvited?: () => unknown;
       ) : null}
       <div className="grid gap-4 sm:grid-cols-[2fr_1fr]">
         <TextField label="E-mail to invite" type="email" autoComplete="off" error={formState.errors.email?.message} {...register("email")} />
-        <SelectField label="Role" error={formState.errors.role?.message} hint={ROLE_SUMMARIES[role as keyof typeof ROLE_SUMMARIES]} {...register("role")}>
+        <SelectField label="Role" error={formState.errors.role?.message} hint={ROLE_SUMMARIES[role]} {...register("role")}>
           {ROLES.map((r) => (
             <option key={r} value={r}>
               {ROLE_LABELS[r]}

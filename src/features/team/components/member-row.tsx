@@ -28,7 +28,8 @@ export function MemberRow({ member, isSelf, canManage, onChanged, onRemoved }: M
     <tr className="border-t border-ink-800 align-top">
       <th scope="row" className="py-3 pr-4 text-left font-medium text-ink-50">
         {member.name}
-        {isSelf ? <span className="ml-2 text-xs font-normal text-ink-300">(you)</span> : null}
+        {isSelf ? " " : null}
+        {isSelf ? <span className="ml-1 text-xs font-normal text-ink-300">(you)</span> : null}
       </th>
       <td className="py-3 pr-4 text-ink-200">{member.email}</td>
       <td className="py-3 pr-4">
