@@ -18,6 +18,7 @@ export default defineConfig({
         test: {
           name: "shared",
           include: ["shared/**/*.test.ts"],
+          benchmark: { include: ["tests/bench/**/*.bench.ts"] },
           environment: "node",
           setupFiles: ["tests/support/fail-on-console-error.ts"],
         },

@@ -47,7 +47,7 @@ export function ConfirmButton({ label, triggerLabel, title, description, confirm
       <dialog
         ref={dialog}
         aria-labelledby={titleId}
-        className="m-auto w-full max-w-md rounded-lg border border-ink-600 bg-ink-900 p-6 text-ink-100 backdrop:bg-ink-950/80"
+        className="m-auto w-full max-w-md rounded-lg border text-left border-ink-600 bg-ink-900 p-6 text-ink-100 backdrop:bg-ink-950/80"
       >
         <h2 id={titleId} className="text-lg font-semibold text-ink-50">
           {title}

@@ -1,6 +1,6 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState, type ReactNode } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { ROLES } from "../../../../shared/permissions";
 import { InviteInputSchema } from "../../../../shared/schemas/team";
@@ -19,11 +19,11 @@ export function InviteForm({ onInvited, sentNote }: { onInvited?: () => unknown;
   const [sentTo, setSentTo] = useState<string | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
   // Least privilege by default: an invitee starts as a viewer unless the owner picks more.
-  const { register, handleSubmit, setError, reset, watch, formState } = useForm<Values, unknown, z.output<typeof InviteInputSchema>>({
+  const { register, handleSubmit, setError, reset, control, formState } = useForm<Values, unknown, z.output<typeof InviteInputSchema>>({
     resolver: zodResolver(InviteInputSchema),
     defaultValues: { email: "", role: "viewer" },
   });
-  const role = watch("role");
+  const role = useWatch({ control, name: "role" });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);

@@ -1,0 +1,208 @@
+import { solveChain } from "./chain-solve";
+import { Emissivity, emissivitySlope, evaluateEmissivity, validateEmissivity } from "./emissivity";
+import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA, ThermalInputError, requireAbove, requireEmissivityValue, requireInRange, requireWhole } from "./errors";
+import { GASES, GasName, accommodationAt, freeMolecularParameter, requireGas } from "./gas-conduction";
+import { MAX_SHIELDS } from "./radiation-network";
+
+/** Solid conduction through the spacer between two neighbours, per unit area. */
+export type SpacerModel =
+  | { conductance_W_per_m2_K: number }
+  /** Bulk k/t scaled by the fraction that survives the point contacts (default 1: bulk, an upper bound). */
+  | { conductivity_W_per_m_K: number; thickness_m: number; contactFactor?: number };
+
+export interface BlanketGas {
+  gas: GasName;
+  pressure_Pa: number;
+  /** Where the gauge reads pressure_Pa; default 300 K (common practice: a room-temperature gauge). */
+  gaugeTemperature_K?: number;
+  /** Coefficients of the warmer and the colder surface of every gap; default the gas table's, at each surface's temperature. */
+  accommodation?: { warm: number; cold: number };
+}
+
+export interface BlanketLayersInput {
+  area_m2: number;
+  warm: { temperature_K: number; emissivity: Emissivity };
+  cold: { temperature_K: number; emissivity: Emissivity };
+  /** Number of shields (reflector layers). */
+  layers: number;
+  reflector: { warmSide: Emissivity; coldSide: Emissivity };
+  spacer?: SpacerModel;
+  gas?: BlanketGas;
+}
+
+export interface BlanketLayersResult {
+  heatLeak_W: number;
+  heatFlux_W_per_m2: number;
+  /** radiation_W + solid_W + gas_W = heatLeak_W: each mechanism's part of the heat through the coldest gap. */
+  radiation_W: number;
+  solid_W: number;
+  gas_W: number;
+  /** Shields only, warm → cold. */
+  layerTemperatures_K: number[];
+  /** Newton iterations; 0 when there are no layers to solve for. */
+  iterations: number;
+}
+
+const DEFAULT_GAUGE_K = 300;
+
+/**
+ * Layer-by-layer blanket, planar. Every gap i between node i (warmer) and node i + 1 carries
+ * q_i = σ(T_i⁴ − T_{i+1}⁴)/(1/ε_i + 1/ε_{i+1} − 1) + h_s·(T_i − T_{i+1}) + q_gas(T_i, T_{i+1}),
+ * radiation between two large parallel gray plates (Incropera, DeWitt, Bergman & Lavine, 6th
+ * ed., Table 13.3), solid conduction through the spacer, and free-molecular gas conduction
+ * (Corruccini 1959, see gas-conduction.ts). The blanket is taken to fill the space: the
+ * spacer and the gas act in every gap, the two next to the walls included. The layer
+ * temperatures make the heat equal through every gap (Newton on the chain, chain-solve.ts).
+ */
+export function estimateLayers(input: BlanketLayersInput): BlanketLayersResult {
+  const v = validateLayers(input);
+  const n = v.layers;
+  const t = new Array<number>(n + 2).fill(0);
+  t[0] = v.tw;
+  t[n + 1] = v.tc;
+  const gaps = gapModel(v);
+  const q = new Array<number>(n + 1).fill(0);
+  const scratch = new Array<number>(n + 1).fill(0);
+  // Two starts: T⁴ falling evenly (radiation-dominated) or T falling evenly (conduction-
+  // dominated); Newton begins from whichever balances the gaps better.
+  let best = Infinity;
+  let bestStart: number[] = [];
+  for (const fourth of [true, false]) {
+    for (let k = 1; k <= n; k++) {
+      const f = (n + 1 - k) / (n + 1);
+      t[k] = fourth ? Math.sqrt(Math.sqrt(v.tc ** 4 + (v.tw ** 4 - v.tc ** 4) * f)) : v.tc + (v.tw - v.tc) * f;
+    }
+    gaps(t, q, scratch, scratch);
+    let worst = 0;
+    for (let g = 0; g < n; g++) worst = Math.max(worst, Math.abs(q[g] - q[g + 1]));
+    if (worst < best) {
+      best = worst;
+      bestStart = t.slice();
+    }
+  }
+  for (let k = 1; k <= n; k++) t[k] = bestStart[k];
+  const iterations = n > 0 ? solveChain(t, gaps, "Blanket layer temperatures") : 0;
+  const parts = gapParts(v, t[n], t[n + 1], n === 0 ? v.warmModel : v.reflector.coldSide, v.coldModel);
+  const heatFlux_W_per_m2 = parts.radiation + parts.solid + parts.gas;
+  return {
+    heatLeak_W: heatFlux_W_per_m2 * v.area_m2,
+    heatFlux_W_per_m2,
+    radiation_W: parts.radiation * v.area_m2,
+    solid_W: parts.solid * v.area_m2,
+    gas_W: parts.gas * v.area_m2,
+    layerTemperatures_K: t.slice(1, n + 1),
+    iterations,
+  };
+}
+
+type Validated = ReturnType<typeof validateLayers>;
+
+function validateLayers(input: BlanketLayersInput) {
+  if (input === null || typeof input !== "object") throw new ThermalInputError("input", input, "a blanket description");
+  const area_m2 = requireAbove("area_m2", input.area_m2, 0, "m²");
+  const tw = requireAbove("warm.temperature_K", input.warm?.temperature_K, 0, "K");
+  const tc = requireAbove("cold.temperature_K", input.cold?.temperature_K, 0, "K");
+  if (tw <= tc) throw new ThermalInputError("warm.temperature_K", tw, `a temperature above cold.temperature_K (${tc} K)`);
+  validateEmissivity(input.warm.emissivity, "warm.emissivity");
+  validateEmissivity(input.cold.emissivity, "cold.emissivity");
+  const layers = requireWhole("layers", input.layers, 0, MAX_SHIELDS);
+  if (input.reflector === null || typeof input.reflector !== "object") {
+    throw new ThermalInputError("reflector", input.reflector, "a reflector { warmSide, coldSide }");
+  }
+  validateEmissivity(input.reflector.warmSide, "reflector.warmSide");
+  validateEmissivity(input.reflector.coldSide, "reflector.coldSide");
+  return {
+    area_m2,
+    tw,
+    tc,
+    layers,
+    warmModel: input.warm.emissivity,
+    coldModel: input.cold.emissivity,
+    reflector: input.reflector,
+    spacer_W_per_m2_K: spacerConductance(input.spacer),
+    gas: gasParameters(input.gas),
+  };
+}
+
+function spacerConductance(spacer: SpacerModel | undefined): number {
+  if (spacer === undefined) return 0;
+  if (spacer === null || typeof spacer !== "object") throw new ThermalInputError("spacer", spacer, "a spacer conductance or conductivity model");
+  if ("conductance_W_per_m2_K" in spacer) return requireAbove("spacer.conductance_W_per_m2_K", spacer.conductance_W_per_m2_K, 0, "W/(m²·K)");
+  const k = requireAbove("spacer.conductivity_W_per_m_K", spacer.conductivity_W_per_m_K, 0, "W/(m·K)");
+  const thickness_m = requireAbove("spacer.thickness_m", spacer.thickness_m, 0, "m");
+  const contact = spacer.contactFactor === undefined ? 1 : requireInRange("spacer.contactFactor", spacer.contactFactor, Number.MIN_VALUE, 1);
+  return (contact * k) / thickness_m;
+}
+
+function gasParameters(gas: BlanketGas | undefined) {
+  if (gas === undefined) return undefined;
+  if (gas === null || typeof gas !== "object") throw new ThermalInputError("gas", gas, "a residual gas { gas, pressure_Pa, … }");
+  const name = requireGas("gas.gas", gas.gas);
+  if (typeof gas.pressure_Pa !== "number" || !Number.isFinite(gas.pressure_Pa) || gas.pressure_Pa < 0) {
+    throw new ThermalInputError("gas.pressure_Pa", gas.pressure_Pa, "a number of at least 0 Pa");
+  }
+  const gauge_K = gas.gaugeTemperature_K === undefined ? DEFAULT_GAUGE_K : requireAbove("gas.gaugeTemperature_K", gas.gaugeTemperature_K, 0, "K");
+  const fixed = gas.accommodation;
+  if (fixed !== undefined) {
+    requireEmissivityValue("gas.accommodation.warm", fixed?.warm);
+    requireEmissivityValue("gas.accommodation.cold", fixed?.cold);
+  }
+  // G·P in W/(m²·K) per unit overall accommodation.
+  return { perAccommodation: freeMolecularParameter(name, gauge_K) * gas.pressure_Pa, fixed, table: GASES[name].accommodation };
+}
+
+/** The gap heats and their derivatives for solveChain; per unit area. */
+function gapModel(v: Validated) {
+  const n = v.layers;
+  return (t: number[], q: number[], dqdWarm: number[], dqdCold: number[]): void => {
+    for (let g = 0; g <= n; g++) {
+      const a = t[g];
+      const b = t[g + 1];
+      const upper = g === 0 ? v.warmModel : v.reflector.coldSide;
+      const lower = g === n ? v.coldModel : v.reflector.warmSide;
+      const eu = evaluateEmissivity(upper, a);
+      const el = evaluateEmissivity(lower, b);
+      const r = 1 / eu + 1 / el - 1;
+      // a⁴ − b⁴ factored, so close neighbours keep their digits.
+      const rad = (SIGMA * (a - b) * (a + b) * (a * a + b * b)) / r;
+      // dR/dT = −ε′/ε²; the wall faces sit at fixed temperatures, so only shields move.
+      const dRu = g === 0 ? 0 : -emissivitySlope(upper, a, eu) / (eu * eu);
+      const dRl = g === n ? 0 : -emissivitySlope(lower, b, el) / (el * el);
+      let dWarm = (4 * SIGMA * a * a * a - rad * dRu) / r + v.spacer_W_per_m2_K;
+      let dCold = (-4 * SIGMA * b * b * b - rad * dRl) / r - v.spacer_W_per_m2_K;
+      let heat = rad + v.spacer_W_per_m2_K * (a - b);
+      if (v.gas !== undefined && v.gas.perAccommodation > 0) {
+        const gas = gasTerm(v.gas, a, b);
+        heat += gas.heat;
+        dWarm += gas.dWarm;
+        dCold += gas.dCold;
+      }
+      q[g] = heat;
+      dqdWarm[g] = dWarm;
+      dqdCold[g] = dCold;
+    }
+  };
+}
+
+/** G·P·a(T_a, T_b)·(T_a − T_b) with a = a_c·a_h/(a_h + a_c − a_c·a_h) and its derivatives (∂a/∂a_h = a_c²/D², ∂a/∂a_c = a_h²/D²). */
+function gasTerm(gas: NonNullable<Validated["gas"]>, a: number, b: number) {
+  const hot = gas.fixed ? { value: gas.fixed.warm, slope: 0 } : accommodationAt(gas.table, a);
+  const cold = gas.fixed ? { value: gas.fixed.cold, slope: 0 } : accommodationAt(gas.table, b);
+  const d = hot.value + cold.value - cold.value * hot.value;
+  const overall = (cold.value * hot.value) / d;
+  const dt = a - b;
+  return {
+    heat: gas.perAccommodation * overall * dt,
+    dWarm: gas.perAccommodation * (overall + (dt * cold.value * cold.value * hot.slope) / (d * d)),
+    dCold: gas.perAccommodation * (-overall + (dt * hot.value * hot.value * cold.slope) / (d * d)),
+  };
+}
+
+/** Each mechanism's heat flux through one gap. */
+function gapParts(v: Validated, a: number, b: number, upper: Emissivity, lower: Emissivity) {
+  const eu = evaluateEmissivity(upper, a);
+  const el = evaluateEmissivity(lower, b);
+  const radiation = (SIGMA * (a - b) * (a + b) * (a * a + b * b)) / (1 / eu + 1 / el - 1);
+  const gas = v.gas !== undefined && v.gas.perAccommodation > 0 ? gasTerm(v.gas, a, b).heat : 0;
+  return { radiation, solid: v.spacer_W_per_m2_K * (a - b), gas };
+}
