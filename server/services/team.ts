@@ -1,5 +1,5 @@
 import type { Role } from "../../shared/permissions";
-import type { AcceptInvitationInput, Invitation, InviteInput, Member, Team } from "../../shared/schemas/team";
+import type { AcceptInvitationInput, Invitation, InvitationPreview, InviteInput, Member, Team } from "../../shared/schemas/team";
 import * as accounts from "../db/repositories/accounts";
 import { insertAuditEntry } from "../db/repositories/audit";
 import { enqueueEmail } from "../db/repositories/outbox";
@@ -90,7 +90,7 @@ export async function revokeInvitation(ctx: ServiceContext, actor: Actor, invita
   });
 }
 
-export async function previewInvitation(ctx: ServiceContext, token: string) {
+export async function previewInvitation(ctx: ServiceContext, token: string): Promise<InvitationPreview> {
   const found = await team.findUsableInvitationByTokenHash(ctx.db, hashToken(token), ctx.clock());
   if (!found) throw invalidToken();
   return { email: found.invitation.email, role: found.invitation.role, organizationName: found.organizationName };

@@ -46,3 +46,6 @@ export const OutboxMessageSchema = z.object({
 });
 export type OutboxMessage = z.infer<typeof OutboxMessageSchema>;
 export const OutboxSchema = z.object({ messages: z.array(OutboxMessageSchema) });
+
+export const InvitationPreviewSchema = z.object({ email: z.string(), role: RoleSchema, organizationName: z.string() });
+export type InvitationPreview = z.infer<typeof InvitationPreviewSchema>;

@@ -3,7 +3,7 @@ import { ThermalInputError, requireAbove, requireEmissivityValue } from "./error
 export type GasName = "helium" | "hydrogen" | "neon" | "nitrogen" | "air" | "argon";
 
 export interface GasData {
-  /** Ratio of specific heats near room temperature. */
+  /** Ratio of specific heats. */
   gamma: number;
   molarMass_kg_per_mol: number;
   /** Hard-sphere molecular diameter, for the mean free path. */
@@ -14,21 +14,22 @@ export interface GasData {
 
 /**
  * Gas data, one row per gas.
- * - γ: 5/3 for the monatomic gases (kinetic theory); 1.40 for nitrogen and air and 1.41 for
- *   hydrogen at room temperature (common practice). Hydrogen's rotational heat capacity freezes
- *   out below ~100 K, so its γ and G are room-temperature values, as in Corruccini's use.
+ * - γ: 5/3 for the monatomic gases and 7/5 for the diatomic ones (kinetic theory of ideal
+ *   gases; measured room-temperature values are within 1 %, common practice). Hydrogen's
+ *   rotational heat capacity freezes out below ~100 K; G keeps the room-temperature γ, as
+ *   the published tables of G do.
  * - Molar masses: IUPAC standard atomic weights; dry air 28.965 g/mol (common practice).
  * - Diameters: viscosity-derived hard-sphere diameters as tabulated in J. F. O'Hanlon,
- *   A User's Guide to Vacuum Technology, 3rd ed., Appendix B (from memory).
+ *   A User's Guide to Vacuum Technology, 3rd ed., appendix of gas properties (from memory).
  * - Accommodation at 300, 76 and 20 K for helium, hydrogen, neon and air: R. J. Corruccini,
  *   Vacuum 7–8 (1959) 19–29, as reproduced in R. F. Barron, Cryogenic Systems, 2nd ed.,
- *   Sec. 6 (from memory; air's 0.8–0.9 at 300 K taken as 0.85). Nitrogen takes air's values
- *   and argon takes air's values too: an assumption, not a measurement. Pass measured
- *   coefficients whenever they exist; published values scatter widely with surface state.
+ *   chapter on insulation (from memory; air's 0.8–0.9 at 300 K taken as 0.85). Nitrogen and
+ *   argon take air's values: an assumption, not a measurement. Pass measured coefficients
+ *   whenever they exist; published values scatter widely with the state of the surface.
  */
 export const GASES: Record<GasName, GasData> = {
   helium: { gamma: 5 / 3, molarMass_kg_per_mol: 4.002602e-3, diameter_m: 2.18e-10, accommodation: [[20, 0.59], [76, 0.42], [300, 0.29]] },
-  hydrogen: { gamma: 1.41, molarMass_kg_per_mol: 2.01588e-3, diameter_m: 2.74e-10, accommodation: [[20, 0.97], [76, 0.53], [300, 0.29]] },
+  hydrogen: { gamma: 1.4, molarMass_kg_per_mol: 2.01588e-3, diameter_m: 2.74e-10, accommodation: [[20, 0.97], [76, 0.53], [300, 0.29]] },
   neon: { gamma: 5 / 3, molarMass_kg_per_mol: 20.1797e-3, diameter_m: 2.59e-10, accommodation: [[20, 1], [76, 0.83], [300, 0.66]] },
   nitrogen: { gamma: 1.4, molarMass_kg_per_mol: 28.0134e-3, diameter_m: 3.75e-10, accommodation: [[20, 1], [76, 1], [300, 0.85]] },
   air: { gamma: 1.4, molarMass_kg_per_mol: 28.965e-3, diameter_m: 3.72e-10, accommodation: [[20, 1], [76, 1], [300, 0.85]] },

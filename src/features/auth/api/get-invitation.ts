@@ -1,12 +1,9 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
-import { RoleSchema } from "../../../../shared/schemas/auth";
+import { InvitationPreviewSchema } from "../../../../shared/schemas/team";
 import { apiRequest } from "../../../lib/api-client";
 import { authKeys } from "./auth-keys";
 
-// shared/schemas has no schema for this preview yet; keep it in step with GET /api/invitations/:token.
-export const InvitationPreviewSchema = z.object({ email: z.string(), role: RoleSchema, organizationName: z.string() });
-export type InvitationPreview = z.infer<typeof InvitationPreviewSchema>;
+export type { InvitationPreview } from "../../../../shared/schemas/team";
 
 export const getInvitation = (token: string, signal?: AbortSignal) =>
   apiRequest("GET", `/invitations/${encodeURIComponent(token)}`, { schema: InvitationPreviewSchema, signal });
