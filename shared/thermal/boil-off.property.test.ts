@@ -1,5 +1,5 @@
 import fc from "fast-check";
-import { describe, expect, it } from "vitest";
+import { describe, it } from "vitest";
 import { boilOff, heatFromLiquidVolume, heatFromStandardVentFlow, heatFromVentedMass } from "./boil-off";
 import { CRYOGEN_IDS } from "./fluids";
 

@@ -10,7 +10,8 @@ export type Emissivity =
   | { kind: "table"; points: [temperature_K: number, emissivity: number][] }; // linear in T, clamped at the ends
 
 // A power-law exponent beyond this is a typo, not a surface: the Hagen–Rubens regime of metals
-// gives n ≈ 0.5 (R. Siegel & J. R. Howell, Thermal Radiation Heat Transfer, 4th ed., Sec. 4.5).
+// gives n ≈ 0.5 (R. Siegel & J. R. Howell, Thermal Radiation Heat Transfer, 4th ed., Ch. 4,
+// the Hagen–Rubens relation; from memory).
 const MAX_EXPONENT = 5;
 
 const MODEL_ALLOWED = 'an emissivity above 0 and at most 1, or { kind: "power" | "table", … }';
