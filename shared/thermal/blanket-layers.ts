@@ -57,32 +57,32 @@ const DEFAULT_GAUGE_K = 300;
 export function estimateLayers(input: BlanketLayersInput): BlanketLayersResult {
   const v = validateLayers(input);
   const n = v.layers;
-  const t = new Array<number>(n + 2).fill(0);
-  t[0] = v.tw;
-  t[n + 1] = v.tc;
   const gaps = gapModel(v);
   const q = new Array<number>(n + 1).fill(0);
   const scratch = new Array<number>(n + 1).fill(0);
-  // Two starts: T⁴ falling evenly (radiation-dominated) or T falling evenly (conduction-
-  // dominated); Newton begins from whichever balances the gaps better.
+  // Offsets above the cold wall, u = T − T_c (see chain-solve.ts). Two starts: T⁴ falling
+  // evenly (radiation-dominated) or T falling evenly (conduction-dominated); Newton begins
+  // from whichever balances the gaps better.
+  const u = new Array<number>(n + 2).fill(0);
+  u[0] = v.tw - v.tc;
   let best = Infinity;
   let bestStart: number[] = [];
   for (const fourth of [true, false]) {
     for (let k = 1; k <= n; k++) {
       const f = (n + 1 - k) / (n + 1);
-      t[k] = fourth ? Math.sqrt(Math.sqrt(v.tc ** 4 + (v.tw ** 4 - v.tc ** 4) * f)) : v.tc + (v.tw - v.tc) * f;
+      u[k] = fourth ? Math.sqrt(Math.sqrt(v.tc ** 4 + (v.tw ** 4 - v.tc ** 4) * f)) - v.tc : (v.tw - v.tc) * f;
     }
-    gaps(t, q, scratch, scratch);
+    gaps(u, q, scratch, scratch);
     let worst = 0;
     for (let g = 0; g < n; g++) worst = Math.max(worst, Math.abs(q[g] - q[g + 1]));
     if (worst < best) {
       best = worst;
-      bestStart = t.slice();
+      bestStart = u.slice();
     }
   }
-  for (let k = 1; k <= n; k++) t[k] = bestStart[k];
-  const iterations = n > 0 ? solveChain(t, gaps, "Blanket layer temperatures") : 0;
-  const parts = gapParts(v, t[n], t[n + 1], n === 0 ? v.warmModel : v.reflector.coldSide, v.coldModel);
+  for (let k = 1; k <= n; k++) u[k] = bestStart[k];
+  const iterations = n > 0 ? solveChain(u, v.tc, gaps, "Blanket layer temperatures") : 0;
+  const parts = gapParts(v, u[n], 0, n === 0 ? v.warmModel : v.reflector.coldSide, v.coldModel);
   const heatFlux_W_per_m2 = parts.radiation + parts.solid + parts.gas;
   return {
     heatLeak_W: heatFlux_W_per_m2 * v.area_m2,
@@ -90,7 +90,7 @@ export function estimateLayers(input: BlanketLayersInput): BlanketLayersResult {
     radiation_W: parts.radiation * v.area_m2,
     solid_W: parts.solid * v.area_m2,
     gas_W: parts.gas * v.area_m2,
-    layerTemperatures_K: t.slice(1, n + 1),
+    layerTemperatures_K: u.slice(1, n + 1).map((offset) => v.tc + offset),
     iterations,
   };
 }
@@ -151,28 +151,29 @@ function gasParameters(gas: BlanketGas | undefined) {
   return { perAccommodation: freeMolecularParameter(name, gauge_K) * gas.pressure_Pa, fixed, table: GASES[name].accommodation };
 }
 
-/** The gap heats and their derivatives for solveChain; per unit area. */
+/** The gap heats and their derivatives for solveChain, per unit area, on offsets u = T − T_c. */
 function gapModel(v: Validated) {
   const n = v.layers;
-  return (t: number[], q: number[], dqdWarm: number[], dqdCold: number[]): void => {
+  return (u: number[], q: number[], dqdWarm: number[], dqdCold: number[]): void => {
     for (let g = 0; g <= n; g++) {
-      const a = t[g];
-      const b = t[g + 1];
+      const a = v.tc + u[g];
+      const b = v.tc + u[g + 1];
       const upper = g === 0 ? v.warmModel : v.reflector.coldSide;
       const lower = g === n ? v.coldModel : v.reflector.warmSide;
       const eu = evaluateEmissivity(upper, a);
       const el = evaluateEmissivity(lower, b);
       const r = 1 / eu + 1 / el - 1;
-      // a⁴ − b⁴ factored, so close neighbours keep their digits.
-      const rad = (SIGMA * (a - b) * (a + b) * (a * a + b * b)) / r;
+      const drop = u[g] - u[g + 1];
+      // a⁴ − b⁴ factored around the offset difference, so close neighbours keep their digits.
+      const rad = (SIGMA * drop * (a + b) * (a * a + b * b)) / r;
       // dR/dT = −ε′/ε²; the wall faces sit at fixed temperatures, so only shields move.
       const dRu = g === 0 ? 0 : -emissivitySlope(upper, a, eu) / (eu * eu);
       const dRl = g === n ? 0 : -emissivitySlope(lower, b, el) / (el * el);
       let dWarm = (4 * SIGMA * a * a * a - rad * dRu) / r + v.spacer_W_per_m2_K;
       let dCold = (-4 * SIGMA * b * b * b - rad * dRl) / r - v.spacer_W_per_m2_K;
-      let heat = rad + v.spacer_W_per_m2_K * (a - b);
+      let heat = rad + v.spacer_W_per_m2_K * drop;
       if (v.gas !== undefined && v.gas.perAccommodation > 0) {
-        const gas = gasTerm(v.gas, a, b);
+        const gas = gasTerm(v.gas, a, b, drop);
         heat += gas.heat;
         dWarm += gas.dWarm;
         dCold += gas.dCold;
@@ -185,24 +186,26 @@ function gapModel(v: Validated) {
 }
 
 /** G·P·a(T_a, T_b)·(T_a − T_b) with a = a_c·a_h/(a_h + a_c − a_c·a_h) and its derivatives (∂a/∂a_h = a_c²/D², ∂a/∂a_c = a_h²/D²). */
-function gasTerm(gas: NonNullable<Validated["gas"]>, a: number, b: number) {
+function gasTerm(gas: NonNullable<Validated["gas"]>, a: number, b: number, drop: number) {
   const hot = gas.fixed ? { value: gas.fixed.warm, slope: 0 } : accommodationAt(gas.table, a);
   const cold = gas.fixed ? { value: gas.fixed.cold, slope: 0 } : accommodationAt(gas.table, b);
   const d = hot.value + cold.value - cold.value * hot.value;
   const overall = (cold.value * hot.value) / d;
-  const dt = a - b;
   return {
-    heat: gas.perAccommodation * overall * dt,
-    dWarm: gas.perAccommodation * (overall + (dt * cold.value * cold.value * hot.slope) / (d * d)),
-    dCold: gas.perAccommodation * (-overall + (dt * hot.value * hot.value * cold.slope) / (d * d)),
+    heat: gas.perAccommodation * overall * drop,
+    dWarm: gas.perAccommodation * (overall + (drop * cold.value * cold.value * hot.slope) / (d * d)),
+    dCold: gas.perAccommodation * (-overall + (drop * hot.value * hot.value * cold.slope) / (d * d)),
   };
 }
 
-/** Each mechanism's heat flux through one gap. */
-function gapParts(v: Validated, a: number, b: number, upper: Emissivity, lower: Emissivity) {
+/** Each mechanism's heat flux through one gap, from the offsets of its two nodes. */
+function gapParts(v: Validated, ua: number, ub: number, upper: Emissivity, lower: Emissivity) {
+  const a = v.tc + ua;
+  const b = v.tc + ub;
+  const drop = ua - ub;
   const eu = evaluateEmissivity(upper, a);
   const el = evaluateEmissivity(lower, b);
-  const radiation = (SIGMA * (a - b) * (a + b) * (a * a + b * b)) / (1 / eu + 1 / el - 1);
-  const gas = v.gas !== undefined && v.gas.perAccommodation > 0 ? gasTerm(v.gas, a, b).heat : 0;
-  return { radiation, solid: v.spacer_W_per_m2_K * (a - b), gas };
+  const radiation = (SIGMA * drop * (a + b) * (a * a + b * b)) / (1 / eu + 1 / el - 1);
+  const gas = v.gas !== undefined && v.gas.perAccommodation > 0 ? gasTerm(v.gas, a, b, drop).heat : 0;
+  return { radiation, solid: v.spacer_W_per_m2_K * drop, gas };
 }

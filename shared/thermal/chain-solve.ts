@@ -3,96 +3,141 @@ import { solveTridiagonalInPlace } from "./linear-solve";
 
 /**
  * A chain of nodes 0…n+1 (0 the warm end, n+1 the cold end, both held fixed) joined by n + 1
- * gaps. `gaps` fills, for every gap g between node g and node g + 1, the heat q[g] flowing
- * cold-ward and its partial derivatives with respect to the two node temperatures.
+ * gaps. Temperatures are passed as offsets above the cold end, u = T − T_cold, so that a gap
+ * of a few microkelvin next to a cold wall keeps its digits. `gaps` fills, for every gap g
+ * between node g and node g + 1, the heat q[g] flowing cold-ward (which has the sign of
+ * u[g] − u[g+1]) and its partial derivatives with respect to the two node temperatures.
  */
-export type ChainGaps = (t: number[], q: number[], dqdWarm: number[], dqdCold: number[]) => void;
+export type ChainGaps = (u: number[], q: number[], dqdWarm: number[], dqdCold: number[]) => void;
 
 const MAX_ITERATIONS = 500;
-const MAX_HALVINGS = 40;
-// Newton converges quadratically: once a step is this small the error left is far below 1e-9.
+const MAX_HALVINGS = 30;
+const WARM_UP_STEPS = 2;
+// Converged when the heat through every gap agrees to this, relative to the mean heat, and the
+// next Newton correction moves no node by more than STEP_TOLERANCE of its temperature.
+const BALANCE_TOLERANCE = 1e-11;
 const STEP_TOLERANCE = 1e-10;
-// Largest gap-to-gap heat mismatch, relative to the mean heat, that is only rounding noise.
-const RESIDUAL_FLOOR = 1e-14;
-// A line search that finds no descent is accepted as converged only below this mismatch.
-const STALL_FLOOR = 1e-12;
 
 /**
- * Solves for the interior node temperatures of `t` (in place; the interior holds the starting
- * guess) so the same heat crosses every gap: r_k = q_{k−1} − q_k = 0 for k = 1…n. Newton's
+ * Solves for the interior offsets of `u` (in place; the interior holds the starting guess) so
+ * the same heat crosses every gap: r_k = q_{k−1} − q_k = 0. Two substitution steps first
+ * (every gap's secant conductance q/ΔT frozen, the series chain solved exactly), then Newton's
  * method on the tridiagonal Jacobian with a backtracking line search on Σr² (J. E. Dennis &
  * R. B. Schnabel, Numerical Methods for Unconstrained Optimization and Nonlinear Equations,
- * Sec. 6.3). Nodes are kept between the end temperatures, where every solution lies.
- * Returns the number of Newton iterations; throws ThermalConvergenceError if it stalls.
+ * Sec. 6.3); where the line search finds no descent, another substitution step. Nodes stay
+ * between the ends, where every solution lies. `tCold_K` turns offsets into temperatures for
+ * the relative step test. Returns the number of iterations; throws ThermalConvergenceError.
  */
-export function solveChain(t: number[], gaps: ChainGaps, what: string): number {
-  const n = t.length - 2;
+export function solveChain(u: number[], tCold_K: number, gaps: ChainGaps, what: string): number {
+  const n = u.length - 2;
   if (n <= 0) return 0;
-  const tWarm = t[0];
-  const tCold = t[n + 1];
-  const q = zeros(n + 1);
-  const dWarm = zeros(n + 1);
-  const dCold = zeros(n + 1);
-  const sub = zeros(n);
-  const diag = zeros(n);
-  const sup = zeros(n);
-  const step = zeros(n);
-  const start = zeros(n);
-  let merit = residualMerit(t, gaps, q, dWarm, dCold);
+  const top = u[0];
+  const w = new Workspace(n);
+  let merit = evaluate(u, gaps, w);
+  for (let step = 0; step < WARM_UP_STEPS; step++) {
+    substitute(u, w);
+    merit = evaluate(u, gaps, w);
+  }
   for (let iterations = 1; iterations <= MAX_ITERATIONS; iterations++) {
-    // Jacobian row k (node k + 1): ∂r/∂t_k = dWarm[k], ∂r/∂t_{k+1} = dCold[k] − dWarm[k+1], ∂r/∂t_{k+2} = −dCold[k+1].
+    // Jacobian row k (node k + 1): ∂r/∂u_k = dWarm[k], ∂r/∂u_{k+1} = dCold[k] − dWarm[k+1], ∂r/∂u_{k+2} = −dCold[k+1].
     for (let k = 0; k < n; k++) {
-      sub[k] = dWarm[k];
-      diag[k] = dCold[k] - dWarm[k + 1];
-      sup[k] = -dCold[k + 1];
-      step[k] = q[k + 1] - q[k];
-      start[k] = t[k + 1];
+      w.sub[k] = w.dWarm[k];
+      w.diag[k] = w.dCold[k] - w.dWarm[k + 1];
+      w.sup[k] = -w.dCold[k + 1];
+      w.step[k] = w.q[k + 1] - w.q[k];
+      w.start[k] = u[k + 1];
     }
-    solveTridiagonalInPlace(n, sub, diag, sup, step);
+    solveTridiagonalInPlace(n, w.sub, w.diag, w.sup, w.step);
     let full = 0;
-    for (let k = 0; k < n; k++) full = Math.max(full, Math.abs(step[k]) / start[k]);
-    if (full < STEP_TOLERANCE || merit.relative < RESIDUAL_FLOOR) {
-      // Converged: the Newton correction is below the tolerance (or rounding is all that is
-      // left). The caller evaluates its gaps once more at these temperatures for its outputs.
-      for (let k = 0; k < n; k++) t[k + 1] = clamp(start[k] + step[k], tCold, tWarm);
-      return iterations;
-    }
-    let lambda = 1;
+    for (let k = 0; k < n; k++) full = Math.max(full, Math.abs(w.step[k]) / (tCold_K + w.start[k]));
+    if (merit.relative <= BALANCE_TOLERANCE && (full <= STEP_TOLERANCE || !Number.isFinite(full))) return iterations;
     let accepted = false;
-    for (let halving = 0; halving <= MAX_HALVINGS && !accepted; halving++, lambda *= 0.5) {
-      for (let k = 0; k < n; k++) t[k + 1] = clamp(start[k] + lambda * step[k], tCold, tWarm);
-      const trial = residualMerit(t, gaps, q, dWarm, dCold);
-      // Armijo condition on ½Σr², whose slope along the Newton direction is −Σr².
-      if (trial.value <= (1 - 1e-4 * lambda) * merit.value) {
-        merit = trial;
-        accepted = true;
+    if (Number.isFinite(full)) {
+      let lambda = 1;
+      for (let halving = 0; halving <= MAX_HALVINGS && !accepted; halving++, lambda *= 0.5) {
+        for (let k = 0; k < n; k++) u[k + 1] = clamp(w.start[k] + lambda * w.step[k], 0, top);
+        const trial = evaluate(u, gaps, w);
+        // Armijo condition on ½Σr², whose slope along the Newton direction is −Σr².
+        if (trial.value <= (1 - 1e-4 * lambda) * merit.value) {
+          merit = trial;
+          accepted = true;
+        }
       }
     }
     if (!accepted) {
-      for (let k = 0; k < n; k++) t[k + 1] = start[k];
-      // No descent left: fine if only rounding remains, otherwise a genuine stall.
-      if (merit.relative < STALL_FLOOR) return iterations;
-      throw new ThermalConvergenceError(what, iterations, merit.relative);
+      for (let k = 0; k < n; k++) u[k + 1] = w.start[k];
+      merit = evaluate(u, gaps, w);
+      // Only rounding left: done. Otherwise the Jacobian misleads here; substitute instead.
+      if (merit.relative <= BALANCE_TOLERANCE) return iterations;
+      substitute(u, w);
+      merit = evaluate(u, gaps, w);
     }
   }
   throw new ThermalConvergenceError(what, MAX_ITERATIONS, merit.relative);
 }
 
-/** Σ r_k² and the largest |r_k| relative to the mean gap heat, after evaluating every gap. */
-function residualMerit(t: number[], gaps: ChainGaps, q: number[], dWarm: number[], dCold: number[]) {
-  gaps(t, q, dWarm, dCold);
-  const n = q.length - 1;
+/**
+ * One substitution step: freeze each gap's conductance C_g = q_g/(u_g − u_{g+1}) and solve the
+ * series chain exactly, Q = (u_0 − u_{n+1})/Σ 1/C_g, marching up from the cold end so every
+ * term is positive. Needs w.q and w.dWarm from an evaluation at u.
+ */
+function substitute(u: number[], w: Workspace): void {
+  const n = u.length - 2;
+  let resistance = 0;
+  for (let g = 0; g <= n; g++) {
+    const drop = u[g] - u[g + 1];
+    const secant = drop > 0 ? w.q[g] / drop : w.dWarm[g];
+    w.conductance[g] = secant > 0 ? secant : Number.MIN_VALUE;
+    resistance += 1 / w.conductance[g];
+  }
+  const heat = u[0] / resistance;
+  let above = 0;
+  for (let g = n; g >= 1; g--) {
+    above += heat / w.conductance[g];
+    u[g] = Math.min(above, u[0]);
+  }
+}
+
+/** Evaluates every gap; returns Σr² and the largest |r_k| relative to the mean gap heat. */
+function evaluate(u: number[], gaps: ChainGaps, w: Workspace) {
+  gaps(u, w.q, w.dWarm, w.dCold);
+  const n = w.q.length - 1;
   let sum = 0;
   let mean = 0;
   let largest = 0;
-  for (let g = 0; g <= n; g++) mean += Math.abs(q[g]);
+  for (let g = 0; g <= n; g++) mean += Math.abs(w.q[g]);
   mean /= n + 1;
   for (let k = 0; k < n; k++) {
-    const r = q[k] - q[k + 1];
+    const r = w.q[k] - w.q[k + 1];
     sum += r * r;
     largest = Math.max(largest, Math.abs(r));
   }
   return { value: sum, relative: mean > 0 ? largest / mean : largest };
+}
+
+/** Arrays reused across iterations, so the loop allocates nothing per node. */
+class Workspace {
+  readonly q: number[];
+  readonly dWarm: number[];
+  readonly dCold: number[];
+  readonly conductance: number[];
+  readonly sub: number[];
+  readonly diag: number[];
+  readonly sup: number[];
+  readonly step: number[];
+  readonly start: number[];
+
+  constructor(n: number) {
+    this.q = zeros(n + 1);
+    this.dWarm = zeros(n + 1);
+    this.dCold = zeros(n + 1);
+    this.conductance = zeros(n + 1);
+    this.sub = zeros(n);
+    this.diag = zeros(n);
+    this.sup = zeros(n);
+    this.step = zeros(n);
+    this.start = zeros(n);
+  }
 }
 
 function clamp(value: number, low: number, high: number): number {

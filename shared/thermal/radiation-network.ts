@@ -88,7 +88,10 @@ export function estimateStack(input: StackInput): StackResult {
       network.solve();
       for (let k = 0; k < n; k++) t[k + 1] = network.shieldT[k];
     }
-    iterations += WARM_UP_PASSES + solveChain(t, network.gaps, "Shield temperatures with temperature-dependent emissivity");
+    const u = t.map((temperature_K) => temperature_K - tc);
+    u[n + 1] = 0;
+    iterations += WARM_UP_PASSES + solveChain(u, tc, network.gaps, "Shield temperatures with temperature-dependent emissivity");
+    for (let k = 1; k <= n; k++) t[k] = tc + u[k];
   }
   network.setShieldEmissivities(t);
   network.solve();
@@ -134,6 +137,7 @@ function validateStack(input: StackInput) {
 class Network {
   readonly shieldT: number[];
   private readonly n: number;
+  private readonly nodeT: number[]; // scratch: absolute temperatures of nodes 0…n+1
   private readonly warmFace: number[]; // surface resistance of each shield's warm face
   private readonly coldFace: number[];
   private readonly space: number[]; // gap g lies between node g and node g + 1
@@ -156,6 +160,7 @@ class Network {
     const n = warmModels.length;
     this.n = n;
     this.shieldT = zeros(n);
+    this.nodeT = zeros(n + 2);
     this.warmFace = zeros(n);
     this.coldFace = zeros(n);
     this.dWarmFace = zeros(n);
@@ -182,19 +187,22 @@ class Network {
   }
 
   /** Heat σ(T_g⁴ − T_{g+1}⁴)/R_g through every gap with its face resistances, for solveChain. */
-  readonly gaps = (t: number[], q: number[], dqdWarm: number[], dqdCold: number[]): void => {
-    this.setShieldEmissivities(t);
+  readonly gaps = (u: number[], q: number[], dqdWarm: number[], dqdCold: number[]): void => {
     const n = this.n;
+    const tc = this.tc;
+    for (let k = 1; k <= n; k++) this.nodeT[k] = tc + u[k];
+    this.setShieldEmissivities(this.nodeT);
     for (let g = 0; g <= n; g++) {
-      const a = t[g];
-      const b = t[g + 1];
+      const a = tc + u[g];
+      const b = tc + u[g + 1];
+      const drop = u[g] - u[g + 1];
       const upper = g === 0 ? this.warmWall : this.coldFace[g - 1];
       const lower = g === n ? this.coldWall : this.warmFace[g];
       const dUpper = g === 0 ? 0 : this.dColdFace[g - 1];
       const dLower = g === n ? 0 : this.dWarmFace[g];
       const r = upper + this.space[g] + lower;
-      // a⁴ − b⁴ factored, so a thousand nearly equal neighbours do not cancel digits away.
-      const heat = (SIGMA * (a - b) * (a + b) * (a * a + b * b)) / r;
+      // a⁴ − b⁴ factored around the offset difference, so close neighbours keep their digits.
+      const heat = (SIGMA * drop * (a + b) * (a * a + b * b)) / r;
       q[g] = heat;
       dqdWarm[g] = (4 * SIGMA * a * a * a - heat * dUpper) / r;
       dqdCold[g] = (-4 * SIGMA * b * b * b - heat * dLower) / r;

@@ -2,3 +2,4 @@ export * from "./organizations";
 export * from "./users";
 export * from "./tokens";
 export * from "./audit-and-mail";
+export * from "./materials";
