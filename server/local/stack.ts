@@ -3,6 +3,7 @@ import { startServer } from "../bootstrap";
 import { createDb } from "../db/client";
 import { runMigrations } from "../db/migrate";
 import { seedDemo } from "../db/seed/demo";
+import { seedLibrary } from "../db/seed/library";
 import { parseEnv } from "../env";
 import { newId } from "../ids";
 import { startSmtpFake } from "../mail/smtp-fake";
@@ -50,6 +51,8 @@ export async function startLocalStack(options: {
     const { db, pool } = createDb(env.DATABASE_URL);
     await runMigrations(db);
     const seeded = await seedDemo(db, { hashPassword, newId, now: new Date() });
+    const library = await seedLibrary(db, { newId, now: new Date() });
+    options.log(`library seed: ${library.inserted} entries added, ${library.updated} updated`);
     await pool.end();
     options.log(seeded ? "seeded the demo organization" : "demo organization already present; data kept");
 

@@ -1,5 +1,5 @@
 import { Router } from "express";
-import { PasswordResetConfirmSchema, PasswordResetRequestSchema, SignInInputSchema, SignUpInputSchema } from "../../shared/schemas/auth";
+import { PasswordResetConfirmSchema, PasswordResetRequestSchema, PreferencesInputSchema, SignInInputSchema, SignUpInputSchema } from "../../shared/schemas/auth";
 import { clearSessionCookie, requireSession, setSessionCookie } from "../middleware/session";
 import { actorOf } from "../middleware/require-permission";
 import { parseInput } from "../middleware/validate";
@@ -31,6 +31,10 @@ export function authRouter(ctx: ServiceContext): Router {
 
   router.get("/me", requireSession, async (req, res) => {
     res.json(await auth.loadMe(ctx, actorOf(req).userId));
+  });
+
+  router.patch("/me/preferences", requireSession, async (req, res) => {
+    res.json(await auth.updatePreferences(ctx, actorOf(req).userId, parseInput(PreferencesInputSchema, req.body)));
   });
 
   router.post("/password-reset", publicLimit, async (req, res) => {

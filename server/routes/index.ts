@@ -2,7 +2,9 @@ import { Router } from "express";
 import { notFound } from "../errors";
 import type { ServiceContext } from "../services/context";
 import { authRouter } from "./auth";
+import { cryogensRouter } from "./cryogens";
 import { healthRouter } from "./health";
+import { materialsRouter } from "./materials";
 import { outboxRouter } from "./outbox";
 import { invitationsRouter, teamRouter } from "./team";
 
@@ -14,6 +16,8 @@ export function apiRouter(ctx: ServiceContext): Router {
   api.use("/team", teamRouter(ctx));
   api.use("/invitations", invitationsRouter(ctx));
   api.use("/outbox", outboxRouter(ctx));
+  api.use("/materials", materialsRouter(ctx));
+  api.use("/cryogens", cryogensRouter(ctx));
   api.use(() => {
     throw notFound("API route");
   });

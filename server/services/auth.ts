@@ -1,5 +1,5 @@
 import { permissionsOf } from "../../shared/permissions";
-import type { Me, PasswordResetConfirm, SignInInput, SignUpInput } from "../../shared/schemas/auth";
+import type { Me, PasswordResetConfirm, PreferencesInput, SignInInput, SignUpInput } from "../../shared/schemas/auth";
 import * as accounts from "../db/repositories/accounts";
 import { enqueueEmail } from "../db/repositories/outbox";
 import { insertAuditEntry } from "../db/repositories/audit";
@@ -93,4 +93,10 @@ export async function confirmPasswordReset(ctx: ServiceContext, input: PasswordR
 export function isDuplicateKey(error: unknown): boolean {
   const code = (error as { code?: string; cause?: { code?: string } })?.code ?? (error as { cause?: { code?: string } })?.cause?.code;
   return code === "ER_DUP_ENTRY";
+}
+
+/** A person's own display preferences; the engine and the stored data stay SI. */
+export async function updatePreferences(ctx: ServiceContext, userId: string, input: PreferencesInput): Promise<Me> {
+  await accounts.updateUnitSystem(ctx.db, userId, input.unitSystem);
+  return loadMe(ctx, userId);
 }

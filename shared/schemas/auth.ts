@@ -39,3 +39,6 @@ export const MeSchema = z.object({
   localMail: z.boolean(),
 });
 export type Me = z.infer<typeof MeSchema>;
+
+export const PreferencesInputSchema = z.object({ unitSystem: UnitSystemSchema });
+export type PreferencesInput = z.infer<typeof PreferencesInputSchema>;

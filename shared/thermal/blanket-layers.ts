@@ -81,7 +81,7 @@ export function estimateLayers(input: BlanketLayersInput): BlanketLayersResult {
     }
   }
   for (let k = 1; k <= n; k++) u[k] = bestStart[k];
-  const iterations = n > 0 ? solveChain(u, v.tc, gaps, "Blanket layer temperatures") : 0;
+  const iterations = n > 0 ? solveChain(u, gaps, "Blanket layer temperatures") : 0;
   const parts = gapParts(v, u[n], 0, n === 0 ? v.warmModel : v.reflector.coldSide, v.coldModel);
   const heatFlux_W_per_m2 = parts.radiation + parts.solid + parts.gas;
   return {

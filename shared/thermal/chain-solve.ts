@@ -13,28 +13,32 @@ export type ChainGaps = (u: number[], q: number[], dqdWarm: number[], dqdCold: n
 const MAX_ITERATIONS = 500;
 const MAX_HALVINGS = 30;
 const WARM_UP_STEPS = 2;
-// Converged when the heat through every gap agrees to this, relative to the mean heat, and the
-// next Newton correction moves no node by more than STEP_TOLERANCE of its temperature.
+// Converged when the heat through every gap agrees to this, relative to the mean heat (or to
+// what rounding allows), and the next Newton correction moves no node by more than
+// STEP_TOLERANCE of the temperature drops beside it.
 const BALANCE_TOLERANCE = 1e-11;
 const STEP_TOLERANCE = 1e-10;
+// How many ulps of temperature the balance test allows for, where rounding sets the floor.
+const ROUNDING_MARGIN = 64;
 
 /**
  * Solves for the interior offsets of `u` (in place; the interior holds the starting guess) so
- * the same heat crosses every gap: r_k = q_{k−1} − q_k = 0. Two substitution steps first
- * (every gap's secant conductance q/ΔT frozen, the series chain solved exactly), then Newton's
+ * the same heat crosses every gap: r_k = q_{k−1} − q_k = 0. A few substitution steps first
+ * (every gap's secant conductance q/ΔT frozen, the series chain solved exactly; skip them with
+ * warmUpSteps = 0 when the start is already close), then Newton's
  * method on the tridiagonal Jacobian with a backtracking line search on Σr² (J. E. Dennis &
  * R. B. Schnabel, Numerical Methods for Unconstrained Optimization and Nonlinear Equations,
  * Sec. 6.3); where the line search finds no descent, another substitution step. Nodes stay
- * between the ends, where every solution lies. `tCold_K` turns offsets into temperatures for
- * the relative step test. Returns the number of iterations; throws ThermalConvergenceError.
+ * between the ends, where every solution lies. Returns the number of Newton iterations;
+ * throws ThermalConvergenceError.
  */
-export function solveChain(u: number[], tCold_K: number, gaps: ChainGaps, what: string): number {
+export function solveChain(u: number[], gaps: ChainGaps, what: string, warmUpSteps = WARM_UP_STEPS): number {
   const n = u.length - 2;
   if (n <= 0) return 0;
   const top = u[0];
   const w = new Workspace(n);
   let merit = evaluate(u, gaps, w);
-  for (let step = 0; step < WARM_UP_STEPS; step++) {
+  for (let step = 0; step < warmUpSteps; step++) {
     substitute(u, w);
     merit = evaluate(u, gaps, w);
   }
@@ -48,11 +52,11 @@ export function solveChain(u: number[], tCold_K: number, gaps: ChainGaps, what: 
       w.start[k] = u[k + 1];
     }
     solveTridiagonalInPlace(n, w.sub, w.diag, w.sup, w.step);
-    let full = 0;
-    for (let k = 0; k < n; k++) full = Math.max(full, Math.abs(w.step[k]) / (tCold_K + w.start[k]));
-    if (merit.relative <= BALANCE_TOLERANCE && (full <= STEP_TOLERANCE || !Number.isFinite(full))) return iterations;
+    const settled = stepIsNegligible(u, w.step);
+    const finite = w.step.every(Number.isFinite);
+    if (merit.relative <= merit.reachable && (settled || !finite)) return iterations;
     let accepted = false;
-    if (Number.isFinite(full)) {
+    if (finite) {
       let lambda = 1;
       for (let halving = 0; halving <= MAX_HALVINGS && !accepted; halving++, lambda *= 0.5) {
         for (let k = 0; k < n; k++) u[k + 1] = clamp(w.start[k] + lambda * w.step[k], 0, top);
@@ -68,12 +72,28 @@ export function solveChain(u: number[], tCold_K: number, gaps: ChainGaps, what: 
       for (let k = 0; k < n; k++) u[k + 1] = w.start[k];
       merit = evaluate(u, gaps, w);
       // Only rounding left: done. Otherwise the Jacobian misleads here; substitute instead.
-      if (merit.relative <= BALANCE_TOLERANCE) return iterations;
+      if (merit.relative <= merit.reachable) return iterations;
       substitute(u, w);
       merit = evaluate(u, gaps, w);
     }
   }
   throw new ThermalConvergenceError(what, MAX_ITERATIONS, merit.relative);
+}
+
+/**
+ * True when the Newton correction moves every node by less than STEP_TOLERANCE of the smaller
+ * temperature drop beside it: the heat through a gap follows its drop, so this is what bounds
+ * the error of the heat, not the correction relative to the temperature itself. One part in
+ * ROUNDING_MARGIN/ε_machine of the offset is as close as a double gets.
+ */
+function stepIsNegligible(u: number[], step: number[]): boolean {
+  for (let k = 0; k < step.length; k++) {
+    const node = u[k + 1];
+    const drop = Math.min(u[k] - node, node - u[k + 2]);
+    const limit = Math.max(STEP_TOLERANCE * drop, ROUNDING_MARGIN * Number.EPSILON * node);
+    if (!(Math.abs(step[k]) <= limit)) return false;
+  }
+  return true;
 }
 
 /**
@@ -98,21 +118,34 @@ function substitute(u: number[], w: Workspace): void {
   }
 }
 
-/** Evaluates every gap; returns Σr² and the largest |r_k| relative to the mean gap heat. */
+/**
+ * Evaluates every gap; returns Σr², the largest |r_k| relative to the mean gap heat, and the
+ * balance this chain can reach at all: a one-ulp change of a node's offset moves a gap's heat
+ * by |∂q/∂u|·u·ε_machine, which for tightly coupled shields far exceeds 1e-11 of the heat.
+ */
 function evaluate(u: number[], gaps: ChainGaps, w: Workspace) {
   gaps(u, w.q, w.dWarm, w.dCold);
   const n = w.q.length - 1;
   let sum = 0;
   let mean = 0;
   let largest = 0;
-  for (let g = 0; g <= n; g++) mean += Math.abs(w.q[g]);
+  let sensitivity = 0;
+  for (let g = 0; g <= n; g++) {
+    mean += Math.abs(w.q[g]);
+    sensitivity = Math.max(sensitivity, Math.abs(w.dWarm[g]) * u[g] + Math.abs(w.dCold[g]) * u[g + 1]);
+  }
   mean /= n + 1;
   for (let k = 0; k < n; k++) {
     const r = w.q[k] - w.q[k + 1];
     sum += r * r;
     largest = Math.max(largest, Math.abs(r));
   }
-  return { value: sum, relative: mean > 0 ? largest / mean : largest };
+  const scale = mean > 0 ? mean : 1;
+  return {
+    value: sum,
+    relative: largest / scale,
+    reachable: Math.max(BALANCE_TOLERANCE, (ROUNDING_MARGIN * Number.EPSILON * sensitivity) / scale),
+  };
 }
 
 /** Arrays reused across iterations, so the loop allocates nothing per node. */

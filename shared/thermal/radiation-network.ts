@@ -90,7 +90,7 @@ export function estimateStack(input: StackInput): StackResult {
     }
     const u = t.map((temperature_K) => temperature_K - tc);
     u[n + 1] = 0;
-    iterations += WARM_UP_PASSES + solveChain(u, tc, network.gaps, "Shield temperatures with temperature-dependent emissivity");
+    iterations += WARM_UP_PASSES + solveChain(u, network.gaps, "Shield temperatures with temperature-dependent emissivity");
     for (let k = 1; k <= n; k++) t[k] = tc + u[k];
   }
   network.setShieldEmissivities(t);

@@ -220,3 +220,22 @@ describe("password reset", () => {
     expect((await t.ctx.db.query.emailOutbox.findFirst())?.status).toBe("sent");
   });
 });
+
+describe("PATCH /api/auth/me/preferences", () => {
+  it("stores the unit system for the signed-in user only", async () => {
+    const viewer = await t.signInAs("viewer");
+    const res = await viewer.patch("/api/auth/me/preferences").send({ unitSystem: "us" });
+    expect(res.status).toBe(200);
+    expect(res.body.user.unitSystem).toBe("us");
+    expect((await viewer.get("/api/auth/me")).body.user.unitSystem).toBe("us");
+    expect((await (await t.signInAs("owner")).get("/api/auth/me")).body.user.unitSystem).toBe("si");
+  });
+
+  it("refuses an unknown unit system and needs a session", async () => {
+    const viewer = await t.signInAs("viewer");
+    const bad = await viewer.patch("/api/auth/me/preferences").send({ unitSystem: "imperial" });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields[0]).toEqual({ path: "unitSystem", message: "unitSystem must be si or us" });
+    expect((await t.agent().patch("/api/auth/me/preferences").send({ unitSystem: "us" })).status).toBe(401);
+  });
+});

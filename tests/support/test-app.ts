@@ -4,6 +4,7 @@ import { inject } from "vitest";
 import { createApp } from "../../server/app";
 import { buildContext } from "../../server/bootstrap";
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from "../../server/db/seed/demo";
+import { seedLibrary } from "../../server/db/seed/library";
 import { parseEnv } from "../../server/env";
 import { newId } from "../../server/ids";
 import { startSmtpFake, type SmtpFake } from "../../server/mail/smtp-fake";
@@ -51,6 +52,7 @@ export async function startTestApp(envOverrides: Record<string, string> = {}) {
       await resetDatabase(ctx.db);
       smtp.clear();
       await seedDemo(ctx.db, { hashPassword, newId, now: new Date() });
+      await seedLibrary(ctx.db, { newId, now: new Date() });
     },
     async signInAs(role: Role) {
       const a = agent();

@@ -63,3 +63,7 @@ export async function consumePasswordResetToken(db: Tx, tokenHash: string, now: 
   await db.update(passwordResetTokens).set({ usedAt: now }).where(eq(passwordResetTokens.id, row.id));
   return row;
 }
+
+export async function updateUnitSystem(db: Tx, userId: string, unitSystem: "si" | "us") {
+  await db.update(users).set({ unitSystem }).where(eq(users.id, userId));
+}

@@ -1,0 +1,51 @@
+import { datetime, double, index, int, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import type { DesignContent } from "../../../shared/schemas/design";
+import type { ResolvedMaterial } from "../../../shared/design/to-assembly";
+import type { Prediction } from "../../../shared/design/prediction";
+import { jsonText } from "./json-text";
+import { organizations } from "./organizations";
+import { users } from "./users";
+
+export const designs = mysqlTable(
+  "designs",
+  {
+    id: varchar("id", { length: 32 }).primaryKey(),
+    organizationId: varchar("organization_id", { length: 32 })
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    name: varchar("name", { length: 120 }).notNull(),
+    vesselLabel: varchar("vessel_label", { length: 120 }),
+    latestRevision: int("latest_revision").notNull(),
+    /** From the latest revision's prediction, so the list needs no JSON parsing. */
+    coldHeat_W: double("cold_heat_w"),
+    boilOff_L_per_day: double("boil_off_l_per_day"),
+    createdByUserId: varchar("created_by_user_id", { length: 32 }).references(() => users.id, { onDelete: "set null" }),
+    createdAt: datetime("created_at", { mode: "date", fsp: 3 }).notNull(),
+    updatedAt: datetime("updated_at", { mode: "date", fsp: 3 }).notNull(),
+  },
+  (t) => [index("designs_org_idx").on(t.organizationId, t.updatedAt)],
+);
+
+// A revision is an immutable snapshot: its content, the exact material versions it resolved and
+// the prediction computed then, so a test always points at the prediction that held when it ran.
+export const designRevisions = mysqlTable(
+  "design_revisions",
+  {
+    id: varchar("id", { length: 32 }).primaryKey(),
+    organizationId: varchar("organization_id", { length: 32 })
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    designId: varchar("design_id", { length: 32 })
+      .notNull()
+      .references(() => designs.id, { onDelete: "cascade" }),
+    revision: int("revision").notNull(),
+    name: varchar("name", { length: 120 }).notNull(),
+    content: jsonText<DesignContent>("content").notNull(),
+    materials: jsonText<ResolvedMaterial[]>("materials").notNull(),
+    prediction: jsonText<Prediction>("prediction").notNull(),
+    changeNote: varchar("change_note", { length: 500 }),
+    createdByUserId: varchar("created_by_user_id", { length: 32 }).references(() => users.id, { onDelete: "set null" }),
+    createdAt: datetime("created_at", { mode: "date", fsp: 3 }).notNull(),
+  },
+  (t) => [uniqueIndex("design_revision_unique").on(t.designId, t.revision), index("design_revisions_org_idx").on(t.organizationId)],
+);
