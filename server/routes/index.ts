@@ -3,6 +3,7 @@ import { notFound } from "../errors";
 import type { ServiceContext } from "../services/context";
 import { authRouter } from "./auth";
 import { cryogensRouter } from "./cryogens";
+import { designsRouter, estimateRouter } from "./designs";
 import { healthRouter } from "./health";
 import { materialsRouter } from "./materials";
 import { outboxRouter } from "./outbox";
@@ -18,6 +19,8 @@ export function apiRouter(ctx: ServiceContext): Router {
   api.use("/outbox", outboxRouter(ctx));
   api.use("/materials", materialsRouter(ctx));
   api.use("/cryogens", cryogensRouter(ctx));
+  api.use("/designs", designsRouter(ctx));
+  api.use(estimateRouter(ctx));
   api.use(() => {
     throw notFound("API route");
   });

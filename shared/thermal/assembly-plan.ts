@@ -265,7 +265,7 @@ function validateSupports(supports: AssemblyDesign["supports"], sinks: PlanSink[
     const count = s.count === undefined ? 1 : requireWhole(`${field}.count`, s.count, 1, 1_000_000);
     const from = s.from === "warm" ? -1 : stageEnd(`${field}.from`, s.from, stages, `"warm"${stageRange}`);
     const to = s.to === "cold" ? sinks.length - 1 : stageEnd(`${field}.to`, s.to, stages, `"cold"${stageRange}`);
-    if (to <= from) throw new ThermalInputError(`${field}.to`, s.to, "a stage colder than `from`, or \"cold\"");
+    if (to <= from) throw new ThermalInputError(`${field}.to`, s.to, `"cold" or a stage colder than ${field}.from`);
     const fit = SUPPORT_MATERIALS[s.material];
     const fromT = from < 0 ? warm_K : sinks[from].temperature_K;
     if (fromT > EXTRAPOLATION_LIMIT_K) {

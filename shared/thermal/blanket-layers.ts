@@ -60,18 +60,18 @@ export function estimateLayers(input: BlanketLayersInput): BlanketLayersResult {
   const gaps = gapModel(v);
   const q = new Array<number>(n + 1).fill(0);
   const scratch = new Array<number>(n + 1).fill(0);
-  // Offsets above the cold wall, u = T − T_c (see chain-solve.ts). Two starts: T⁴ falling
-  // evenly (radiation-dominated) or T falling evenly (conduction-dominated); Newton begins
-  // from whichever balances the gaps better.
+  // Offsets above the cold wall, u = T − T_c (see chain-solve.ts). Three starts: T falling
+  // evenly (conduction-dominated), T⁴ falling evenly, and the pure-radiation network with ε
+  // frozen at the latter's temperatures, solved twice (radiation-dominated); Newton begins
+  // from whichever balances the gaps best.
   const u = new Array<number>(n + 2).fill(0);
   u[0] = v.tw - v.tc;
   let best = Infinity;
   let bestStart: number[] = [];
-  for (const fourth of [true, false]) {
-    for (let k = 1; k <= n; k++) {
-      const f = (n + 1 - k) / (n + 1);
-      u[k] = fourth ? Math.sqrt(Math.sqrt(v.tc ** 4 + (v.tw ** 4 - v.tc ** 4) * f)) - v.tc : (v.tw - v.tc) * f;
-    }
+  for (let start = 0; start < 4; start++) {
+    if (start === 0) for (let k = 1; k <= n; k++) u[k] = ((v.tw - v.tc) * (n + 1 - k)) / (n + 1);
+    if (start === 1) for (let k = 1; k <= n; k++) u[k] = fourthRootOffset(v.tc ** 4 + ((v.tw ** 4 - v.tc ** 4) * (n + 1 - k)) / (n + 1), v.tc);
+    if (start >= 2) radiationStart(v, u, q);
     gaps(u, q, scratch, scratch);
     let worst = 0;
     for (let g = 0; g < n; g++) worst = Math.max(worst, Math.abs(q[g] - q[g + 1]));
@@ -196,6 +196,36 @@ function gasTerm(gas: NonNullable<Validated["gas"]>, a: number, b: number, drop:
     dWarm: gas.perAccommodation * (overall + (drop * cold.value * cold.value * hot.slope) / (d * d)),
     dCold: gas.perAccommodation * (-overall + (drop * hot.value * hot.value * cold.slope) / (d * d)),
   };
+}
+
+/**
+ * Radiation alone with every gap's 1/ε_i + 1/ε_{i+1} − 1 frozen at the current temperatures:
+ * the series network gives σT⁴ at each node exactly (as in radiation-network.ts). Overwrites
+ * u with the new offsets; `resistance` is scratch of length n + 1.
+ */
+function radiationStart(v: Validated, u: number[], resistance: number[]): void {
+  const n = v.layers;
+  let total = 0;
+  for (let g = 0; g <= n; g++) {
+    const upper = g === 0 ? v.warmModel : v.reflector.coldSide;
+    const lower = g === n ? v.coldModel : v.reflector.warmSide;
+    resistance[g] = 1 / evaluateEmissivity(upper, v.tc + u[g]) + 1 / evaluateEmissivity(lower, v.tc + u[g + 1]) - 1;
+    total += resistance[g];
+  }
+  const low = v.tc ** 4;
+  const span = v.tw ** 4 - low;
+  let below = 0;
+  for (let k = n; k >= 1; k--) {
+    below += resistance[k];
+    u[k] = fourthRootOffset(low + (span * below) / total, v.tc);
+  }
+}
+
+/** (x)^(1/4) − T_c without losing the digits of a small offset. */
+function fourthRootOffset(fourth: number, tc: number): number {
+  const t = Math.sqrt(Math.sqrt(fourth));
+  // t − tc = (t⁴ − tc⁴)/((t + tc)(t² + tc²)), exact where t is close to tc.
+  return (fourth - tc ** 4) / ((t + tc) * (t * t + tc * tc));
 }
 
 /** Each mechanism's heat flux through one gap, from the offsets of its two nodes. */

@@ -32,5 +32,27 @@ export const paths = {
     overview: { path: "/", getHref: () => "/" },
     team: { path: "/team", getHref: () => "/team" },
     outbox: { path: "/outbox", getHref: () => "/outbox" },
+    designs: { path: "/designs", getHref: () => "/designs" },
+    newDesign: { path: "/designs/new", getHref: () => "/designs/new" },
+    design: {
+      path: "/designs/:designId",
+      // A revision in the URL opens that snapshot; without one the page shows the latest.
+      getHref: (designId: string, revision?: number) =>
+        `/designs/${encodeURIComponent(designId)}${revision ? `?revision=${revision}` : ""}`,
+    },
+    compare: {
+      path: "/compare",
+      // ids are "designId" or "designId:revision", as GET /api/compare takes them.
+      getHref: (ids: string[] = []) => (ids.length > 0 ? `/compare?ids=${ids.map(encodeURIComponent).join(",")}` : "/compare"),
+    },
+    library: { path: "/library", getHref: (query = "") => `/library${query}` },
+    libraryNew: { path: "/library/new", getHref: () => "/library/new" },
+    libraryImport: { path: "/library/import", getHref: () => "/library/import" },
+    cryogens: { path: "/library/cryogens", getHref: () => "/library/cryogens" },
+    libraryEntry: {
+      path: "/library/:id",
+      getHref: (id: string, version?: number) => `/library/${encodeURIComponent(id)}${version ? `?version=${version}` : ""}`,
+    },
+    libraryPropose: { path: "/library/:id/propose", getHref: (id: string) => `/library/${encodeURIComponent(id)}/propose` },
   },
 } as const;

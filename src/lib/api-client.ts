@@ -46,12 +46,14 @@ export async function apiRequest<S extends z.ZodType | undefined = undefined>(
   options: { body?: unknown; schema?: S; signal?: AbortSignal } = {},
 ): Promise<S extends z.ZodType ? z.output<S> : void> {
   let response: Response;
+  // A FormData body (a file upload) goes as multipart: the browser writes its own Content-Type.
+  const isForm = options.body instanceof FormData;
   try {
     response = await fetch(`/api${path}`, {
       method,
       credentials: "same-origin",
-      headers: options.body === undefined ? { Accept: "application/json" } : { Accept: "application/json", "Content-Type": "application/json" },
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      headers: options.body === undefined || isForm ? { Accept: "application/json" } : { Accept: "application/json", "Content-Type": "application/json" },
+      body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
       signal: options.signal,
     });
   } catch (cause) {

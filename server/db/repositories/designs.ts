@@ -64,7 +64,7 @@ export async function updateDesignHead(
   db: Tx,
   organizationId: string,
   id: string,
-  patch: { name: string; latestRevision: number; coldHeat_W: number | null; boilOff_L_per_day: number | null; updatedAt: Date },
+  patch: { name: string; geometryKind: "planar" | "cylinder" | "sphere"; latestRevision: number; coldHeat_W: number | null; boilOff_L_per_day: number | null; updatedAt: Date },
 ) {
   await db.update(designs).set(patch).where(and(eq(designs.organizationId, organizationId), eq(designs.id, id)));
 }
@@ -84,3 +84,4 @@ export async function findVisibleMaterialVersions(db: Tx, organizationId: string
   const wanted = new Set(refs.map((r) => `${r.materialId}@${r.version}`));
   return rows.filter((r) => wanted.has(`${r.version.materialId}@${r.version.version}`));
 }
+

@@ -1,4 +1,4 @@
-import { datetime, double, index, int, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { datetime, double, index, int, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import type { DesignContent } from "../../../shared/schemas/design";
 import type { ResolvedMaterial } from "../../../shared/design/to-assembly";
 import type { Prediction } from "../../../shared/design/prediction";
@@ -15,6 +15,7 @@ export const designs = mysqlTable(
       .references(() => organizations.id, { onDelete: "cascade" }),
     name: varchar("name", { length: 120 }).notNull(),
     vesselLabel: varchar("vessel_label", { length: 120 }),
+    geometryKind: mysqlEnum("geometry_kind", ["planar", "cylinder", "sphere"]).notNull(),
     latestRevision: int("latest_revision").notNull(),
     /** From the latest revision's prediction, so the list needs no JSON parsing. */
     coldHeat_W: double("cold_heat_w"),

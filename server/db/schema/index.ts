@@ -3,3 +3,4 @@ export * from "./users";
 export * from "./tokens";
 export * from "./audit-and-mail";
 export * from "./materials";
+export * from "./designs";
