@@ -8,6 +8,7 @@ import { parseEnv } from "../env";
 import { newId } from "../ids";
 import { startSmtpFake } from "../mail/smtp-fake";
 import { hashPassword } from "../services/passwords";
+import { seedDemoDesigns } from "../services/demo-designs";
 import { dropDatabase, ensureDatabase, startLocalMariaDb } from "./mariadb";
 
 /**
@@ -58,6 +59,7 @@ export async function startLocalStack(options: {
 
     const server = await startServer(env);
     stops.push(() => server.close());
+    if (await seedDemoDesigns(server.ctx)) options.log("seeded the demo designs");
     return { origin, smtp, stop: stopAll };
   } catch (error) {
     await stopAll();

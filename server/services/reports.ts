@@ -30,7 +30,7 @@ export async function revisionReport(ctx: ServiceContext, actor: Actor, designId
 
 export function renderReport(r: RevisionDetail, printedAt: Date): Promise<Buffer> {
   // Uncompressed so the text is searchable by simple tools; the reports are small.
-  const doc = new PDFDocument({ size: "A4", margin: 48, compress: false, info: { Title: `${r.name} — revision ${r.revision}`, Author: "Frostfold", Subject: "Heat-leak and boil-off estimate" } });
+  const doc = new PDFDocument({ size: "A4", margin: 48, compress: false, info: { Title: `${r.name}, revision ${r.revision}`, Author: "Frostfold", Subject: "Heat-leak and boil-off estimate" } });
   doc.registerFont("body", FONT.regular);
   doc.registerFont("bold", FONT.bold);
   const chunks: Buffer[] = [];

@@ -91,9 +91,13 @@ export function solveEnclosure(input: EnclosureInput): EnclosureResult {
       row[i] = 1;
       rhs.push(SIGMA * s.temperature_K ** 4);
     } else if (s.temperature_K !== undefined) {
-      const conductance = s.emissivity / (1 - s.emissivity); // per unit area, the inverse surface resistance
-      row[i] = seen + conductance;
-      rhs.push(conductance * SIGMA * s.temperature_K ** 4);
+      // ε/(1 − ε) is the inverse surface resistance per unit area. Divide the row by its
+      // diagonal so a nearly black surface (ε/(1 − ε) ~ 1e15) does not swamp the pivot test.
+      const conductance = s.emissivity / (1 - s.emissivity);
+      const diagonal = seen + conductance;
+      for (let j = 0; j < n; j++) row[j] /= diagonal;
+      row[i] = 1;
+      rhs.push((conductance / diagonal) * SIGMA * s.temperature_K ** 4);
     } else {
       row[i] = seen;
       rhs.push((s.netHeat_W ?? 0) / s.area_m2);

@@ -234,6 +234,8 @@ describe("proposing, approving, rejecting and retiring", () => {
     const owner = await t.signInAs("owner");
     const draft = await create(owner, wallFinish("Doubtful wall (invented)"));
     expect((await owner.post(`/api/materials/${draft.id}/retire`).send({})).body.error.code).toBe("not_approved");
+    // The owner decides on the draft they looked at, not one that replaced it meanwhile.
+    expect((await owner.post(`/api/materials/${draft.id}/approval`).send({ decision: "approve", version: 2 })).body.error.code).toBe("stale_draft");
     const res = MaterialDetailSchema.parse((await owner.post(`/api/materials/${draft.id}/approval`).send({ decision: "reject", comment: "no source" })).body);
     expect(res).toMatchObject({ status: "rejected", currentVersion: null, draftVersion: null });
     expect((await owner.post(`/api/materials/${draft.id}/approval`).send({ decision: "approve" })).body.error.code).toBe("no_draft");
@@ -324,8 +326,9 @@ describe("GET /api/materials filters", () => {
     expect((await names("?kind=cryogen")).length).toBe(Object.keys(CRYOGENS).length);
     expect(await names("?status=draft")).toEqual(["Wall 100% (invented)"]);
     expect(await names("?scope=organization")).toEqual(["Wall 100% (invented)"]);
-    expect(await names("?q=100%25")).toEqual(["Wall 100% (invented)"]);
-    expect(await names("?q=netting")).toEqual(["Polyester netting", "Silk netting"]);
+    expect(await names("?q=0%25")).toEqual(["Wall 100% (invented)"]); // unescaped, "0%" would match every name with a 0 in it
+    expect(await names("?q=_")).toEqual([]);
+    expect(await names("?q=netting&kind=spacer")).toEqual(["Polyester netting", "Silk netting"]);
     const bad = await viewer.get("/api/materials?kind=foil");
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields[0]).toMatchObject({ path: "kind", message: expect.stringMatching(/reflector, spacer, wall-finish/) });

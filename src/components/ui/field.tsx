@@ -70,3 +70,22 @@ export function SelectField({ label, hint, error, id, className = "", children, 
     </FieldShell>
   );
 }
+
+type TextAreaFieldProps = ComponentProps<"textarea"> & { label: string; hint?: string; error?: string };
+
+export function TextAreaField({ label, hint, error, id, className = "", ...textarea }: TextAreaFieldProps) {
+  const autoId = useId();
+  const fieldId = id ?? autoId;
+  return (
+    <FieldShell id={fieldId} label={label} hint={hint} error={error}>
+      <textarea
+        id={fieldId}
+        rows={3}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy(fieldId, hint, error)}
+        className={`${CONTROL} border-ink-600 ${className}`}
+        {...textarea}
+      />
+    </FieldShell>
+  );
+}

@@ -1,0 +1,55 @@
+import { useState } from "react";
+import { useController, useFormContext, type FieldPath } from "react-hook-form";
+import type { DesignContentInput } from "../../../../../shared/schemas/design";
+import { unitLabel, type QuantityKind, type UnitSystem } from "../../../../../shared/units";
+import { TextField } from "../../../../components/ui/field";
+import { inputText, localizeRange, parseInput } from "../../../../lib/format-quantity";
+import { useUnitSystem } from "../../../../lib/unit-system";
+
+type QuantityFieldProps = {
+  name: FieldPath<DesignContentInput>;
+  label: string;
+  /** The quantity, for unit conversion; null for pure numbers (counts, fractions, factors). */
+  kind: QuantityKind | null;
+  /** The unit words of a pure number, e.g. "layers". */
+  suffix?: string;
+  hint?: string;
+  /** What an emptied input means: undefined for a required number, null for an optional one. */
+  empty?: null | undefined;
+  disabled?: boolean;
+};
+
+/**
+ * A number typed in the user's unit system while the form keeps SI. The typed text is kept as
+ * typed (a half-written "0." or a wrong "abc" stays on screen); it is re-derived from the form's
+ * value only when that value changes from elsewhere (a reset, a unit switch).
+ */
+export function QuantityField({ name, label, kind, suffix, hint, empty = undefined, disabled }: QuantityFieldProps) {
+  const { control } = useFormContext<DesignContentInput>();
+  const { field, fieldState } = useController({ control, name });
+  const system = useUnitSystem();
+  const [draft, setDraft] = useState<{ text: string; value: unknown; system: UnitSystem } | null>(null);
+  const text = draft && Object.is(draft.value, field.value) && draft.system === system ? draft.text : inputText(kind, field.value, system);
+  const unit = kind ? unitLabel(kind, system) : suffix;
+  const error = fieldState.error?.message;
+
+  return (
+    <TextField
+      label={unit ? `${label} (${unit})` : label}
+      inputMode="decimal"
+      autoComplete="off"
+      name={field.name}
+      ref={field.ref}
+      value={text}
+      disabled={disabled}
+      onBlur={field.onBlur}
+      onChange={(event) => {
+        const value = parseInput(kind, event.target.value, system, empty);
+        setDraft({ text: event.target.value, value, system });
+        field.onChange(value);
+      }}
+      hint={hint}
+      error={error ? localizeRange(error, kind, system) : undefined}
+    />
+  );
+}

@@ -1,0 +1,214 @@
+import type { MaterialKind, MaterialSource, MaterialVersion } from "../../../../../shared/schemas/material";
+import type { Emissivity } from "../../../../../shared/thermal/emissivity";
+import type { CryogenId } from "../../../../../shared/thermal/fluids";
+import type { SupportMaterial } from "../../../../../shared/thermal/supports";
+
+/**
+ * The form's own shape. Numbers are kept as the text typed (so a bad entry stays on screen and
+ * the shared schema, not the browser, says what is wrong); toInput builds the contract's shape.
+ * Paths match the contract's (properties.warmSide.model.reference …) so every error, from the
+ * schema here or from the server, lands beside its input. One wide properties object holds every
+ * kind's fields, so switching kind in a new entry loses nothing typed.
+ */
+export type ModelForm = {
+  kind: "constant" | "power" | "table";
+  value: string;
+  reference: string;
+  referenceTemperature_K: string;
+  exponent: string;
+  points: { temperature_K: string; emissivity: string }[];
+};
+export type SpecForm = { model: ModelForm; banded: boolean; low: ModelForm; high: ModelForm };
+export type SpecPath = "properties.warmSide" | "properties.coldSide" | "properties.surface";
+export type ModelPath = `${SpecPath}.${"model" | "low" | "high"}`;
+
+export type MaterialFormValues = {
+  name: string;
+  properties: {
+    kind: MaterialKind;
+    form: string;
+    /** Reflectors metallized on both faces: one model serves both (a form-only switch). */
+    sameFaces: boolean;
+    warmSide: SpecForm;
+    coldSide: SpecForm;
+    surface: SpecForm;
+    solidConduction: { mode: "none" | "conductance" | "conductivity"; conductance_W_per_m2_K: string; conductivity_W_per_m_K: string; thickness_m: string; contactFactor: string };
+    supportMaterial: SupportMaterial;
+    basedOn: string;
+    coefficients: { solid: string; solidExponent: string; radiation: string; gas: string; solidTemperatureTerm: "" | "mean-temperature" | "polyester-conductivity" };
+    fittedEmissivity: string;
+    fluid: CryogenId;
+    saturationTemperature_K: string;
+    latentHeat_J_per_kg: string;
+    liquidDensity_kg_per_m3: string;
+    vapourDensity_kg_per_m3: string;
+    molarMass_kg_per_mol: string;
+  };
+  validRange_K: { min: string; max: string };
+  thickness_m: string;
+  arealMass_kg_per_m2: string;
+  cost_per_m2: string;
+  source: { type: MaterialSource["type"]; author: string; title: string; year: string; location: string; fromMemory: boolean; test: string; note: string };
+  changeNote: string;
+};
+
+const text = (n: number | null | undefined) => (n === null || n === undefined ? "" : String(n));
+/** "" is "not given"; anything else goes to the schema as a number (NaN is refused there, by name). */
+const num = (s: string) => (s.trim() === "" ? undefined : Number(s));
+const orNull = (s: string) => num(s) ?? null;
+const textOrNull = (s: string) => (s.trim() === "" ? null : s);
+
+const emptyModel = (): ModelForm => ({ kind: "constant", value: "", reference: "", referenceTemperature_K: "300", exponent: "0.5", points: [{ temperature_K: "", emissivity: "" }, { temperature_K: "", emissivity: "" }] });
+const emptySpec = (): SpecForm => ({ model: emptyModel(), banded: false, low: emptyModel(), high: emptyModel() });
+
+export function emptyValues(kind: MaterialKind = "reflector"): MaterialFormValues {
+  return {
+    name: "",
+    properties: {
+      kind,
+      form: kind === "spacer" ? "netting" : "film",
+      sameFaces: true,
+      warmSide: emptySpec(),
+      coldSide: emptySpec(),
+      surface: emptySpec(),
+      solidConduction: { mode: "none", conductance_W_per_m2_K: "", conductivity_W_per_m_K: "", thickness_m: "", contactFactor: "" },
+      supportMaterial: "stainless-304",
+      basedOn: "",
+      coefficients: { solid: "", solidExponent: "", radiation: "", gas: "", solidTemperatureTerm: "" },
+      fittedEmissivity: "",
+      fluid: "nitrogen",
+      saturationTemperature_K: "",
+      latentHeat_J_per_kg: "",
+      liquidDensity_kg_per_m3: "",
+      vapourDensity_kg_per_m3: "",
+      molarMass_kg_per_mol: "",
+    },
+    validRange_K: { min: "", max: "" },
+    thickness_m: "",
+    arealMass_kg_per_m2: "",
+    cost_per_m2: "",
+    source: { type: "citation", author: "", title: "", year: "", location: "", fromMemory: false, test: "", note: "" },
+    changeNote: "",
+  };
+}
+
+function toModel(m: ModelForm): unknown {
+  if (m.kind === "constant") return num(m.value);
+  if (m.kind === "power") return { kind: "power", reference: num(m.reference), referenceTemperature_K: num(m.referenceTemperature_K), exponent: num(m.exponent) };
+  return { kind: "table", points: m.points.map((p) => [num(p.temperature_K), num(p.emissivity)]) };
+}
+const toSpec = (s: SpecForm) => ({ model: toModel(s.model), low: s.banded ? toModel(s.low) : null, high: s.banded ? toModel(s.high) : null });
+
+function toProperties(p: MaterialFormValues["properties"]): unknown {
+  switch (p.kind) {
+    case "reflector":
+      return { kind: p.kind, form: p.form, warmSide: toSpec(p.warmSide), coldSide: toSpec(p.sameFaces ? p.warmSide : p.coldSide) };
+    case "wall-finish":
+      return { kind: p.kind, surface: toSpec(p.surface) };
+    case "spacer": {
+      const s = p.solidConduction;
+      const solidConduction =
+        s.mode === "none" ? null
+        : s.mode === "conductance" ? { conductance_W_per_m2_K: num(s.conductance_W_per_m2_K) }
+        : { conductivity_W_per_m_K: num(s.conductivity_W_per_m_K), thickness_m: num(s.thickness_m), contactFactor: num(s.contactFactor) };
+      return { kind: p.kind, form: p.form, solidConduction };
+    }
+    case "support-material":
+      return { kind: p.kind, supportMaterial: p.supportMaterial };
+    case "correlation-set": {
+      const c = p.coefficients;
+      const coefficients = { solid: num(c.solid), solidExponent: num(c.solidExponent), radiation: num(c.radiation), gas: num(c.gas), solidTemperatureTerm: c.solidTemperatureTerm || undefined };
+      return { kind: p.kind, basedOn: textOrNull(p.basedOn), coefficients, fittedEmissivity: orNull(p.fittedEmissivity) };
+    }
+    case "cryogen":
+      return {
+        kind: p.kind,
+        fluid: p.fluid,
+        saturationTemperature_K: num(p.saturationTemperature_K),
+        latentHeat_J_per_kg: num(p.latentHeat_J_per_kg),
+        liquidDensity_kg_per_m3: num(p.liquidDensity_kg_per_m3),
+        vapourDensity_kg_per_m3: num(p.vapourDensity_kg_per_m3),
+        molarMass_kg_per_mol: num(p.molarMass_kg_per_mol),
+      };
+  }
+}
+
+function toSource(s: MaterialFormValues["source"]): unknown {
+  if (s.type === "measured") return { type: s.type, test: s.test, note: textOrNull(s.note) };
+  if (s.type === "memory") return { type: s.type, note: textOrNull(s.note) };
+  return { type: s.type, author: s.author, title: s.title, year: orNull(s.year), location: textOrNull(s.location), fromMemory: s.fromMemory, note: textOrNull(s.note) };
+}
+
+/** The contract's input, unvalidated: the shared schema checks it next. */
+export function toInput(v: MaterialFormValues): unknown {
+  return {
+    name: v.name,
+    properties: toProperties(v.properties),
+    validRange_K: { min: num(v.validRange_K.min), max: num(v.validRange_K.max) },
+    thickness_m: orNull(v.thickness_m),
+    arealMass_kg_per_m2: orNull(v.arealMass_kg_per_m2),
+    cost_per_m2: orNull(v.cost_per_m2),
+    source: toSource(v.source),
+    changeNote: textOrNull(v.changeNote),
+  };
+}
+
+function fromModel(model: Emissivity | null | undefined): ModelForm {
+  const m = emptyModel();
+  if (model === null || model === undefined) return m;
+  if (typeof model === "number") return { ...m, kind: "constant", value: text(model) };
+  if (model.kind === "power") return { ...m, kind: "power", reference: text(model.reference), referenceTemperature_K: text(model.referenceTemperature_K), exponent: text(model.exponent) };
+  return { ...m, kind: "table", points: model.points.map(([t, e]) => ({ temperature_K: text(t), emissivity: text(e) })) };
+}
+const fromSpec = (s: { model: Emissivity; low?: Emissivity | null; high?: Emissivity | null }): SpecForm => ({
+  model: fromModel(s.model),
+  banded: Boolean(s.low || s.high),
+  low: fromModel(s.low ?? s.model),
+  high: fromModel(s.high ?? s.model),
+});
+
+/** A version as the form's starting point for a proposed change; the change note starts empty. */
+export function fromVersion(v: MaterialVersion): MaterialFormValues {
+  const values = emptyValues(v.properties.kind);
+  const p = v.properties;
+  const props = values.properties;
+  if (p.kind === "reflector") Object.assign(props, { form: p.form, warmSide: fromSpec(p.warmSide), coldSide: fromSpec(p.coldSide), sameFaces: JSON.stringify(p.warmSide) === JSON.stringify(p.coldSide) });
+  if (p.kind === "wall-finish") props.surface = fromSpec(p.surface);
+  if (p.kind === "spacer") {
+    const s = p.solidConduction;
+    props.form = p.form;
+    if (s && s.conductance_W_per_m2_K !== undefined) props.solidConduction = { ...props.solidConduction, mode: "conductance", conductance_W_per_m2_K: text(s.conductance_W_per_m2_K) };
+    else if (s) props.solidConduction = { mode: "conductivity", conductance_W_per_m2_K: "", conductivity_W_per_m_K: text(s.conductivity_W_per_m_K), thickness_m: text(s.thickness_m), contactFactor: text(s.contactFactor) };
+  }
+  if (p.kind === "support-material") props.supportMaterial = p.supportMaterial;
+  if (p.kind === "correlation-set") {
+    const c = p.coefficients;
+    Object.assign(props, { basedOn: p.basedOn ?? "", fittedEmissivity: text(p.fittedEmissivity), coefficients: { solid: text(c.solid), solidExponent: text(c.solidExponent), radiation: text(c.radiation), gas: text(c.gas), solidTemperatureTerm: c.solidTemperatureTerm ?? "" } });
+  }
+  if (p.kind === "cryogen") {
+    Object.assign(props, {
+      fluid: p.fluid,
+      saturationTemperature_K: text(p.saturationTemperature_K),
+      latentHeat_J_per_kg: text(p.latentHeat_J_per_kg),
+      liquidDensity_kg_per_m3: text(p.liquidDensity_kg_per_m3),
+      vapourDensity_kg_per_m3: text(p.vapourDensity_kg_per_m3),
+      molarMass_kg_per_mol: text(p.molarMass_kg_per_mol),
+    });
+  }
+  const s = v.source;
+  values.source = {
+    ...values.source,
+    type: s.type,
+    note: s.note ?? "",
+    ...(s.type === "citation" ? { author: s.author, title: s.title, year: text(s.year), location: s.location ?? "", fromMemory: s.fromMemory } : {}),
+    ...(s.type === "measured" ? { test: s.test } : {}),
+  };
+  return {
+    ...values,
+    name: v.name,
+    validRange_K: { min: text(v.validRange_K.min), max: text(v.validRange_K.max) },
+    thickness_m: text(v.thickness_m),
+    arealMass_kg_per_m2: text(v.arealMass_kg_per_m2),
+    cost_per_m2: text(v.cost_per_m2),
+  };
+}
