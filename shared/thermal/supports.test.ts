@@ -110,8 +110,16 @@ describe("conductivityIntegral", () => {
     expect(conductivityIntegral("ptfe", 77, 77)).toBe(0);
   });
 
-  it("refuses a cold end below the fit's range and a warm end below the cold end", () => {
-    expect(thrown(() => conductivityIntegral("g10-normal", 4, 300)).field).toBe("cold_K");
+  it("holds k at the fit's lower limit below it: the 4→10 K part of G-10 normal is k(10 K)·6 K", () => {
+    // Hand check of the range policy in supports.ts: ∫4→300 = k(10)·(10 − 4) + ∫10→300.
+    const expected = thermalConductivity("g10-normal", 10) * 6 + conductivityIntegral("g10-normal", 10, 300);
+    expect(relativeError(conductivityIntegral("g10-normal", 4, 300), expected)).toBeLessThan(1e-12);
+    const result = supportConduction({ material: "g10-warp", area_m2: 1e-4, length_m: 0.2, warm_K: 77, cold_K: 4.2 });
+    expect(result.warnings.join(" ")).toMatch(/below the .* fit's range \(from 12 K\)/);
+  });
+
+  it("refuses a cold end below 1 K and a warm end below the cold end", () => {
+    expect(thrown(() => conductivityIntegral("g10-normal", 0.5, 300)).field).toBe("cold_K");
     expect(thrown(() => conductivityIntegral("stainless-304", 0.5, 300)).field).toBe("cold_K");
     expect(thrown(() => conductivityIntegral("ptfe", 100, 50)).field).toBe("warm_K");
     expect(thrown(() => conductivityIntegral("ptfe", 4, 450)).field).toBe("warm_K");
@@ -147,7 +155,7 @@ describe("supportConduction", () => {
     ["length_m", { length_m: -1 }],
     ["count", { count: 2.5 }],
     ["count", { count: 0 }],
-    ["cold_K", { cold_K: 2 }],
+    ["cold_K", { cold_K: 0.5 }],
     ["warm_K", { warm_K: 500 }],
   ])("refuses a bad %s", (field, override) => {
     const input = { material: "ptfe", area_m2: 1e-4, length_m: 0.1, warm_K: 300, cold_K: 77, ...override };

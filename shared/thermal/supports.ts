@@ -10,7 +10,11 @@ import { requireAbove, requireWhole, ThermalInputError } from "./errors";
  * 2000). Coefficients were cross-checked against independent transcriptions of those pages.
  *
  * Range policy (our decision): below a fit's lower limit the log-polynomials turn over and are
- * meaningless, so we refuse; from the upper limit (300 K) up to 400 K the fits stay smooth and
+ * meaningless, so the conductivity itself is refused there; but a support often ends in a
+ * liquid-helium bath below the G-10 fits' 10–12 K limit, so the conductivity *integral* may start
+ * as low as 1 K, holding k at its value at the fit's lower limit over the missing stretch. These
+ * materials' k rises with T, so that overstates the (small) missing part: the estimate errs warm,
+ * and a warning says so. From the upper limit (300 K) up to 400 K the fits stay smooth and
  * monotonic, so we extrapolate and warn; above 400 K we refuse.
  */
 export type SupportMaterial =
@@ -34,6 +38,8 @@ export interface SupportMaterialFit {
 
 /** Above this we refuse even with a warning: the fits were never meant for it. */
 export const EXTRAPOLATION_LIMIT_K = 400;
+/** The lowest cold end of a conductivity integral (see the range policy above). */
+export const INTEGRAL_FLOOR_K = 1;
 
 const NIST_PAGES = "NIST Cryogenics Technologies Group, Material Properties pages";
 
@@ -131,14 +137,27 @@ export function thermalConductivity(material: SupportMaterial, temperature_K: nu
   return conductivity(fit, requireFitTemperature("temperature_K", temperature_K, fit));
 }
 
-/** ∫k dT from cold_K to warm_K, W/m, by adaptive Simpson quadrature to 1e-10 relative. */
+function requireIntegralColdEnd(value: unknown, fit: SupportMaterialFit): number {
+  if (typeof value !== "number" || !Number.isFinite(value) || value < INTEGRAL_FLOOR_K || value > EXTRAPOLATION_LIMIT_K) {
+    throw new ThermalInputError("cold_K", value, `a temperature from ${INTEGRAL_FLOOR_K} K to ${EXTRAPOLATION_LIMIT_K} K for ${fit.label}`);
+  }
+  return value;
+}
+
+/**
+ * ∫k dT from cold_K to warm_K, W/m, by adaptive Simpson quadrature to 1e-10 relative. Below the
+ * fit's lower limit k is held at its value there (the range policy at the top of this file).
+ */
 export function conductivityIntegral(material: SupportMaterial, cold_K: number, warm_K: number): number {
   const fit = materialFit(material, "material");
-  const cold = requireFitTemperature("cold_K", cold_K, fit);
+  const cold = requireIntegralColdEnd(cold_K, fit);
   const warm = requireFitTemperature("warm_K", warm_K, fit);
   if (warm < cold) throw new ThermalInputError("warm_K", warm, `a temperature at or above cold_K (${cold} K)`);
   if (warm === cold) return 0;
-  return adaptiveSimpson((t) => conductivity(fit, t), cold, warm, 1e-10);
+  const min = fit.validRange_K[0];
+  const below = cold < min ? conductivity(fit, min) * (min - cold) : 0;
+  const from = Math.max(cold, min);
+  return below + (warm > from ? adaptiveSimpson((t) => conductivity(fit, t), from, warm, 1e-10) : 0);
 }
 
 export interface SupportConductionInput {
@@ -164,7 +183,12 @@ export function supportConduction(input: SupportConductionInput): SupportConduct
   const integral = conductivityIntegral(input.material, input.cold_K, input.warm_K);
 
   const warnings: string[] = [];
-  const max = fit.validRange_K[1];
+  const [min, max] = fit.validRange_K;
+  if (input.cold_K < min) {
+    warnings.push(
+      `cold_K ${input.cold_K} K is below the ${fit.label} fit's range (from ${min} K); conductivity held at its ${min} K value below that, which errs on the warm side`,
+    );
+  }
   if (input.warm_K > max) {
     warnings.push(
       `warm_K ${input.warm_K} K is above the ${fit.label} fit's range (to ${max} K); conductivity extrapolated`,
