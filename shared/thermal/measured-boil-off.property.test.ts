@@ -14,11 +14,13 @@ const times = fc
   .map((steps) => steps.reduce<number[]>((acc, step) => [...acc, (acc.at(-1) ?? 0) + step], []));
 
 const whole = { start_s: 0, end_s: 1e12 };
+const normal = (x: number) => x === 0 || Math.abs(x) > 1e-300;
 
 describe("least-squares rate laws", () => {
   it("an exact straight line is recovered with zero residual", () => {
     fc.assert(
-      fc.property(times, fc.double({ min: -10, max: 10, noNaN: true }), fc.double({ min: -1e3, max: 1e3, noNaN: true }), (t, slope, offset) => {
+      // Subnormal slopes and offsets (below ~1e-300) lose precision in any arithmetic: left out.
+      fc.property(times, fc.double({ min: -10, max: 10, noNaN: true }).filter(normal), fc.double({ min: -1e3, max: 1e3, noNaN: true }).filter(normal), (t, slope, offset) => {
         const fit = fitRate(t, t.map((x) => offset + slope * x), whole);
         const scale = Math.abs(offset) + Math.abs(slope) * t.at(-1)!;
         // Rounding in the values (about ε·scale) limits the slope to about ε·scale / span.
