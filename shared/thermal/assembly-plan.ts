@@ -3,7 +3,7 @@ import { boilOff } from "./boil-off";
 import { validateEmissivity, type Emissivity } from "./emissivity";
 import { requireAbove, requireAtLeast, requireWhole, ThermalInputError } from "./errors";
 import { requireGas } from "./gas-conduction";
-import { EXTRAPOLATION_LIMIT_K, SUPPORT_MATERIAL_IDS, SUPPORT_MATERIALS, type SupportMaterial } from "./supports";
+import { EXTRAPOLATION_LIMIT_K, INTEGRAL_FLOOR_K, SUPPORT_MATERIAL_IDS, SUPPORT_MATERIALS, type SupportMaterial } from "./supports";
 import {
   MAX_BLOCK_LAYERS,
   MAX_LAYUP_ITEMS,
@@ -272,8 +272,9 @@ function validateSupports(supports: AssemblyDesign["supports"], sinks: PlanSink[
       throw new ThermalInputError(`${field}.from`, s.from, `an end at or below ${EXTRAPOLATION_LIMIT_K} K for ${fit.label} (this one is at ${fromT} K)`);
     }
     const toT = sinks[to].temperature_K;
-    if (toT < fit.validRange_K[0]) {
-      throw new ThermalInputError(`${field}.to`, s.to, `an end at or above ${fit.validRange_K[0]} K, the ${fit.label} fit's lower limit (this one is at ${toT} K)`);
+    // Below the fit's lower limit the integral holds k there and warns (supports.ts range policy).
+    if (toT < INTEGRAL_FLOOR_K) {
+      throw new ThermalInputError(`${field}.to`, s.to, `an end at or above ${INTEGRAL_FLOOR_K} K for ${fit.label} (this one is at ${toT} K)`);
     }
     const label = s.label === undefined ? `support ${i + 1}` : String(s.label);
     return { index: i, label, material: s.material, area_m2, length_m, count, from, to };

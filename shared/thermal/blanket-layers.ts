@@ -1,7 +1,7 @@
 import { solveChain } from "./chain-solve";
 import { Emissivity, emissivitySlope, evaluateEmissivity, validateEmissivity } from "./emissivity";
-import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA, ThermalInputError, requireAbove, requireEmissivityValue, requireInRange, requireWhole } from "./errors";
-import { GASES, GasName, accommodationAt, freeMolecularParameter, requireGas } from "./gas-conduction";
+import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA, ThermalInputError, requireAbove, requireWhole } from "./errors";
+import { GASES, GasName, accommodationAt, freeMolecularParameter, requireAccommodation, requireGas } from "./gas-conduction";
 import { MAX_SHIELDS } from "./radiation-network";
 
 /** Solid conduction through the spacer between two neighbours, per unit area. */
@@ -130,7 +130,10 @@ function spacerConductance(spacer: SpacerModel | undefined): number {
   if ("conductance_W_per_m2_K" in spacer) return requireAbove("spacer.conductance_W_per_m2_K", spacer.conductance_W_per_m2_K, 0, "W/(m²·K)");
   const k = requireAbove("spacer.conductivity_W_per_m_K", spacer.conductivity_W_per_m_K, 0, "W/(m·K)");
   const thickness_m = requireAbove("spacer.thickness_m", spacer.thickness_m, 0, "m");
-  const contact = spacer.contactFactor === undefined ? 1 : requireInRange("spacer.contactFactor", spacer.contactFactor, Number.MIN_VALUE, 1);
+  const contact = spacer.contactFactor ?? 1;
+  if (typeof contact !== "number" || !(contact > 0 && contact <= 1)) {
+    throw new ThermalInputError("spacer.contactFactor", contact, "a fraction above 0 and at most 1");
+  }
   return (contact * k) / thickness_m;
 }
 
@@ -144,8 +147,8 @@ function gasParameters(gas: BlanketGas | undefined) {
   const gauge_K = gas.gaugeTemperature_K === undefined ? DEFAULT_GAUGE_K : requireAbove("gas.gaugeTemperature_K", gas.gaugeTemperature_K, 0, "K");
   const fixed = gas.accommodation;
   if (fixed !== undefined) {
-    requireEmissivityValue("gas.accommodation.warm", fixed?.warm);
-    requireEmissivityValue("gas.accommodation.cold", fixed?.cold);
+    requireAccommodation("gas.accommodation.warm", fixed?.warm);
+    requireAccommodation("gas.accommodation.cold", fixed?.cold);
   }
   // G·P in W/(m²·K) per unit overall accommodation.
   return { perAccommodation: freeMolecularParameter(name, gauge_K) * gas.pressure_Pa, fixed, table: GASES[name].accommodation };

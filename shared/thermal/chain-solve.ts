@@ -28,7 +28,7 @@ const ROUNDING_MARGIN = 64;
  * warmUpSteps = 0 when the start is already close), then Newton's
  * method on the tridiagonal Jacobian with a backtracking line search on Σr² (J. E. Dennis &
  * R. B. Schnabel, Numerical Methods for Unconstrained Optimization and Nonlinear Equations,
- * Sec. 6.3); where the line search finds no descent, another substitution step. Nodes stay
+ * Sec. 6.3, from memory); where the line search finds no descent, another substitution step. Nodes stay
  * between the ends, where every solution lies. Returns the number of Newton iterations;
  * throws ThermalConvergenceError.
  */

@@ -18,7 +18,7 @@ function relative(actual: number, expected: number): number {
 
 /**
  * Incropera, DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer, 6th ed.,
- * Sec. 13.2.3: the two-surface enclosure, q12 = σ(T1⁴ − T2⁴) /
+ * Sec. 13.2.3 (section numbers from memory): the two-surface enclosure, q12 = σ(T1⁴ − T2⁴) /
  * [(1 − ε1)/(ε1A1) + 1/(A1F12) + (1 − ε2)/(ε2A2)], the general form behind Table 13.3.
  */
 function twoSurface(t1: number, e1: number, a1: number, t2: number, e2: number, a2: number, f12: number): number {
@@ -43,7 +43,7 @@ describe("solveEnclosure: two-surface enclosures", () => {
   it("long concentric cylinders, per metre", () => {
     // Inner 20 mm tube at 77 K (ε 0.02), outer 50 mm at 300 K (ε 0.05): the setting of Incropera
     // et al., 7th ed., Problem 13.63. F11 = 0, F12 = 1, F21 = r1/r2, F22 = 1 − r1/r2 (Incropera
-    // et al., 6th ed., Sec. 13.1.3, summation and reciprocity). Derived by hand: 0.49884 W/m.
+    // et al., 6th ed., Sec. 13.1.2, summation and reciprocity). Derived by hand: 0.49884 W/m.
     const a1 = Math.PI * 0.02;
     const a2 = Math.PI * 0.05;
     const { surfaces } = solveEnclosure({

@@ -28,7 +28,8 @@ export const MAX_ENCLOSURE_SURFACES = 500;
  * Throws ThermalInputError unless F is square, every F_ij is in [0, 1], every row sums to 1
  * (summation rule) and A_i·F_ij = A_j·F_ji (reciprocity), each within `tolerance`, the
  * reciprocity one relative to the larger area (Incropera, DeWitt, Bergman & Lavine,
- * Fundamentals of Heat and Mass Transfer, 6th ed., Sec. 13.1.2, Eqs. 13.3 and 13.4).
+ * Fundamentals of Heat and Mass Transfer, 6th ed., Sec. 13.1.2, Eqs. 13.3 and 13.4; numbers from
+ * memory).
  */
 export function checkViewFactors(areas_m2: number[], F: number[][], tolerance = 1e-6): void {
   requireInRange("tolerance", tolerance, 0, 0.1);

@@ -36,7 +36,7 @@ export const GASES: Record<GasName, GasData> = {
   argon: { gamma: 5 / 3, molarMass_kg_per_mol: 39.948e-3, diameter_m: 3.64e-10, accommodation: [[20, 1], [76, 1], [300, 0.85]] },
 };
 
-/** Molar gas constant and Boltzmann constant, CODATA 2018 (exact in the 2019 SI). */
+/** Molar gas constant and Boltzmann constant, CODATA 2018 (both exact in the 2019 SI; R truncated). */
 const R_J_PER_MOL_K = 8.314462618;
 const BOLTZMANN_J_PER_K = 1.380649e-23;
 // Free-molecular conduction needs the mean free path well above the gap (common practice: Kn > 10).
@@ -85,8 +85,8 @@ export function gasConduction(input: GasConductionInput): GasConductionResult {
     aWarm = defaultAccommodation(gas, warm_K);
     aCold = defaultAccommodation(gas, cold_K);
   } else {
-    aWarm = requireEmissivityLike("accommodation.warm", input.accommodation?.warm);
-    aCold = requireEmissivityLike("accommodation.cold", input.accommodation?.cold);
+    aWarm = requireAccommodation("accommodation.warm", input.accommodation?.warm);
+    aCold = requireAccommodation("accommodation.cold", input.accommodation?.cold);
   }
   const a = overallAccommodation(aWarm, aCold, areaRatio);
   const result: GasConductionResult = {
@@ -132,8 +132,8 @@ export function meanFreePath(gas: GasName, pressure_Pa: number, temperature_K: n
  * a = a_c·a_h / (a_h + a_c·(1 − a_h)·(A_c/A_h)) (Corruccini 1959).
  */
 export function overallAccommodation(warm: number, cold: number, areaRatio = 1): number {
-  requireEmissivityLike("accommodation.warm", warm);
-  requireEmissivityLike("accommodation.cold", cold);
+  requireAccommodation("accommodation.warm", warm);
+  requireAccommodation("accommodation.cold", cold);
   requireAbove("areaRatio", areaRatio, 0);
   return (cold * warm) / (warm + cold * (1 - warm) * areaRatio);
 }
@@ -172,8 +172,8 @@ function requireAtLeastZero(field: string, value: unknown, unit: string): number
   return value;
 }
 
-// An accommodation coefficient lives in (0, 1] like an emissivity; reuse that check, own words.
-function requireEmissivityLike(field: string, value: unknown): number {
+/** An accommodation coefficient lives in (0, 1] like an emissivity: the same check, its own words. */
+export function requireAccommodation(field: string, value: unknown): number {
   try {
     return requireEmissivityValue(field, value);
   } catch {

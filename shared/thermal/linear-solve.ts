@@ -2,8 +2,8 @@ import { ThermalInputError } from "./errors";
 
 /**
  * Solves A·x = b by Gaussian elimination with partial pivoting (G. H. Golub & C. F. Van Loan,
- * Matrix Computations, 4th ed., Algorithm 3.4.1). `matrix` is n×n, row-major, and is not
- * modified. Throws ThermalInputError("matrix", …) when A is singular to working precision,
+ * Matrix Computations, 4th ed., Algorithm 3.4.1, from memory). `matrix` is n×n, row-major,
+ * and is not modified. Throws ThermalInputError("matrix", …) when A is singular to working precision,
  * which for a radiation enclosure means a group of surfaces sees no surface of known temperature.
  */
 export function solveLinearSystem(matrix: number[][], rhs: number[]): number[] {
@@ -62,8 +62,8 @@ export function solveLinearSystem(matrix: number[][], rhs: number[]): number[] {
 
 /**
  * Solves a tridiagonal system in place by the Thomas algorithm (Golub & Van Loan, 4th ed.,
- * Sec. 4.3.6, Gaussian elimination without pivoting, stable for the diagonally dominant
- * Jacobians of a heat-conducting chain). Row k: sub[k]·x[k−1] + diag[k]·x[k] + sup[k]·x[k+1] = rhs[k].
+ * Sec. 4.3, banded elimination without pivoting, from memory), stable for the diagonally
+ * dominant Jacobians of a heat-conducting chain. Row k: sub[k]·x[k−1] + diag[k]·x[k] + sup[k]·x[k+1] = rhs[k].
  * Overwrites diag and rhs; the answer is left in rhs. Internal to the engine: no validation,
  * because it runs inside Newton iterations on arrays the engine built itself.
  */

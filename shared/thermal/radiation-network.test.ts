@@ -81,7 +81,8 @@ describe("estimateStack: long concentric cylinders", () => {
   });
 
   it("halves the heat gain with the midway shield", () => {
-    // Derived by hand from the series network of Incropera et al., 6th ed., Sec. 13.2.4, per metre:
+    // Derived by hand from the series network of Incropera et al., 6th ed., Sec. 13.2.4 (section
+    // number from memory), per metre:
     // ΣR = 0.98/(0.02·π·0.02) + 1/(π·0.02) + 2·0.98/(0.02·π·0.035) + 1/(π·0.035) + 0.95/(0.05·π·0.05)
     //    = 1817.15 m⁻², q = σ(300⁴ − 77⁴)/ΣR = 0.25167 W/m, 49.55 % below the unshielded 0.49884 W/m.
     const result = estimateStack(tubes([{ warmSide: 0.02, coldSide: 0.02, radius_m: 0.0175 }]));
@@ -261,6 +262,7 @@ describe("estimateStack: bad input", () => {
       },
       "shields[1].radius_m",
     ],
+    ["a given radius that leaves no room for the evenly spaced next shield", (i) => (i.shields[0].radius_m = 0.34), "shields[0].radius_m"],
     ["a shield radius on a planar stack", (i) => ((i.geometry = { kind: "planar", area_m2: 1 }), (i.shields[1].radius_m = 0.35)), "shields[1].radius_m"],
   ])("rejects %s, naming the field", (_name, spoil, field) => {
     const input = valid();

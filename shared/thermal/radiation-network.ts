@@ -42,7 +42,10 @@ export interface StackResult {
   heatFlux_W_per_m2: number;
   shields: { temperature_K: number; radius_m?: number; area_m2: number }[];
   resistances: StackResistance[];
-  /** Network solves until shield temperatures and emissivities agreed; 1 when no shield's emissivity varies. */
+  /**
+   * Passes needed for shield temperatures and emissivities to agree: 1 when no shield's
+   * emissivity varies, else 1 + the substitution and Newton steps taken.
+   */
   iterations: number;
 }
 
@@ -56,7 +59,8 @@ const WARM_UP_PASSES = 2;
  * surface resistance (1 − ε)/(εA), every gap a space resistance 1/(A_inner·F) with F = 1 from
  * the inner to the outer of two concentric (or two large parallel) surfaces, all in series
  * (F. P. Incropera, D. P. DeWitt, T. L. Bergman & A. S. Lavine, Fundamentals of Heat and Mass
- * Transfer, 6th ed., Sec. 13.3, the two-surface enclosure and the radiation shield).
+ * Transfer, 6th ed., Sec. 13.2, the two-surface enclosure and radiation shields; section
+ * numbers from memory).
  */
 export function estimateStack(input: StackInput): StackResult {
   const { nodes, shields, warmEpsilon, coldEpsilon, tw, tc } = validateStack(input);
@@ -122,10 +126,17 @@ function validateStack(input: StackInput) {
   if (!Array.isArray(shields) || shields.length > MAX_SHIELDS) {
     throw new ThermalInputError("shields", Array.isArray(shields) ? `${shields.length} shields` : shields, `a list of at most ${MAX_SHIELDS} shields`);
   }
+  // A layup usually repeats one reflector model object; a valid object stays valid, so check it once.
+  const checked = new Set<Emissivity>();
+  const check = (model: Emissivity, field: string) => {
+    if (typeof model === "object" && model !== null && checked.has(model)) return;
+    validateEmissivity(model, field);
+    if (typeof model === "object") checked.add(model);
+  };
   shields.forEach((shield, i) => {
     if (shield === null || typeof shield !== "object") throw new ThermalInputError(`shields[${i}]`, shield, "a shield { warmSide, coldSide }");
-    validateEmissivity(shield.warmSide, `shields[${i}].warmSide`);
-    validateEmissivity(shield.coldSide, `shields[${i}].coldSide`);
+    check(shield.warmSide, `shields[${i}].warmSide`);
+    check(shield.coldSide, `shields[${i}].coldSide`);
   });
   const nodes = stackNodes(input.geometry, shields.map((s) => s.radius_m));
   const warmEpsilon = evaluateEmissivity(warm.emissivity, tw);
@@ -172,17 +183,19 @@ class Network {
     this.coldWall = (1 - coldEpsilon) / (coldEpsilon * areas[n + 1]);
   }
 
-  /** Face resistances (1 − ε)/(εA) at the node temperatures t[1…n], and their dR/dT = −ε′/(ε²A). */
-  setShieldEmissivities(t: number[]): void {
+  /** Face resistances (1 − ε)/(εA) at the node temperatures t[1…n], and (for Newton) dR/dT = −ε′/(ε²A). */
+  setShieldEmissivities(t: number[], withSlopes = false): void {
     for (let k = 0; k < this.n; k++) {
       const temperature_K = t[k + 1];
       const area = this.areas[k + 1];
       const ew = evaluateEmissivity(this.warmModels[k], temperature_K);
-      const ec = evaluateEmissivity(this.coldModels[k], temperature_K);
+      // Both faces of one film often share a model object: evaluate it once.
+      const ec = this.coldModels[k] === this.warmModels[k] ? ew : evaluateEmissivity(this.coldModels[k], temperature_K);
       this.warmFace[k] = (1 - ew) / (ew * area);
       this.coldFace[k] = (1 - ec) / (ec * area);
+      if (!withSlopes) continue;
       this.dWarmFace[k] = -emissivitySlope(this.warmModels[k], temperature_K, ew) / (ew * ew * area);
-      this.dColdFace[k] = -emissivitySlope(this.coldModels[k], temperature_K, ec) / (ec * ec * area);
+      this.dColdFace[k] = ec === ew && this.coldModels[k] === this.warmModels[k] ? this.dWarmFace[k] : -emissivitySlope(this.coldModels[k], temperature_K, ec) / (ec * ec * area);
     }
   }
 
@@ -191,7 +204,7 @@ class Network {
     const n = this.n;
     const tc = this.tc;
     for (let k = 1; k <= n; k++) this.nodeT[k] = tc + u[k];
-    this.setShieldEmissivities(this.nodeT);
+    this.setShieldEmissivities(this.nodeT, true);
     for (let g = 0; g <= n; g++) {
       const a = tc + u[g];
       const b = tc + u[g + 1];

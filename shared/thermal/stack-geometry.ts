@@ -58,6 +58,10 @@ export function stackNodes(geometry: StackGeometry, shieldRadii_m: (number | und
       throw new ThermalInputError(field, radius_m, `a radius strictly between the cold wall's ${cold_m} m and the warm wall's ${warm_m} m`);
     }
     if (radius_m >= radii_m[k - 1]) {
+      // Blame a radius the caller gave: a defaulted one is only wrong next to a given one.
+      if (given === undefined && k > 1 && shieldRadii_m[k - 2] !== undefined) {
+        throw new ThermalInputError(`shields[${k - 2}].radius_m`, radii_m[k - 1], `a radius above ${radius_m} m, the even spacing of the next shield (or give every radius)`);
+      }
       throw new ThermalInputError(field, radius_m, `a radius below the warmer neighbour's ${radii_m[k - 1]} m (shields listed warm → cold)`);
     }
     radii_m[k] = radius_m;

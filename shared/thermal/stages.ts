@@ -1,5 +1,6 @@
 import type { Plan, PlanSurface, Variant } from "./assembly-plan";
 import { blockHeat, type BlockFrame } from "./block-heat";
+import { ThermalConvergenceError } from "./convergence-error";
 import { brentRoot } from "./root-find";
 import type { StackGeometry } from "./stack-geometry";
 
@@ -66,40 +67,84 @@ export function segmentFrames(plan: Plan, variant: Variant, part: ChainPart): Se
   return result;
 }
 
-// Interface temperatures to a few parts in 10¹³ of the warm end: heats then match to ~1e-11.
+// Interface temperatures to a few parts in 10¹³ of the warm end.
 const RELATIVE_TOLERANCE = 2e-13;
+// Heats of neighbouring blocks must agree this well after polishing, and at least this well at all.
+const HEAT_AGREEMENT = 1e-12;
+const HEAT_AGREEMENT_FLOOR = 1e-7;
+const MAX_SWEEPS = 200;
 
 /**
  * Temperatures of the segment's block boundaries, warm → cold (k blocks give k + 1 values,
- * the ends fixed). With two or more blocks, the first interface T₁ is found by Brent's method
- * on r(T₁) = Q_k(T_{k−1}, T_c) − Q₁(T_h, T₁): given T₁, each following block's cold end is
- * the temperature at which it carries Q₁ (again by Brent). r rises with T₁, is positive at
- * T₁ = T_h (no heat yet) and negative at T₁ = T_c (nothing left to drive the rest), so the
- * root is bracketed; a block that cannot carry Q₁ even down to T_c returns its shortfall.
+ * the ends fixed); each found by Brent's method (root-find.ts).
+ *
+ * Two blocks: the interface T₁ solves Q₁(T_h, T₁) = Q₂(T₁, T_c), whose two sides move apart as
+ * T₁ moves, so T₁ is well determined. Three or more: first a shooting pass on T₁ (given T₁,
+ * each following block's cold end is where it carries Q₁; r(T₁) = Q_k − Q₁ rises with T₁, is
+ * positive at T_h and negative at T_c; a block that cannot carry Q₁ even down to T_c returns
+ * its shortfall). Shooting can amplify the last digits of T₁ enormously (a radiation block
+ * near 4 K hardly feels its cold end), so Gauss–Seidel sweeps then re-solve every interface
+ * between its two neighbours, as in the two-block case, until neighbouring heats agree.
  */
 export function segmentTemperatures(frames: BlockFrame[], warm_K: number, cold_K: number): number[] {
   const k = frames.length;
   if (k === 1) return [warm_K, cold_K];
   const tolerance = RELATIVE_TOLERANCE * warm_K;
-  const temperatures = new Array<number>(k + 1).fill(warm_K);
-  temperatures[k] = cold_K;
+  const t = new Array<number>(k + 1).fill(warm_K);
+  t[k] = cold_K;
+  const balance = (j: number) => {
+    const above = frames[j - 1];
+    const below = frames[j];
+    const a = t[j - 1];
+    const b = t[j + 1];
+    t[j] = brentRoot((x) => blockHeat(above, a, x) - blockHeat(below, x, b), b, a, tolerance);
+  };
+  if (k === 2) {
+    balance(1);
+    return t;
+  }
   const march = (t1: number): number => {
     const q = blockHeat(frames[0], warm_K, t1);
-    temperatures[1] = t1;
-    let t = t1;
+    t[1] = t1;
+    let top = t1;
     for (let j = 1; j < k - 1; j++) {
       const frame = frames[j];
-      const most = blockHeat(frame, t, cold_K);
+      const most = blockHeat(frame, top, cold_K);
       if (most < q) return most - q;
-      const top = t;
-      t = q === 0 ? top : most === q ? cold_K : brentRoot((x) => blockHeat(frame, top, x) - q, cold_K, top, tolerance);
-      temperatures[j + 1] = t;
+      const from = top;
+      top = q === 0 ? from : most === q ? cold_K : brentRoot((x) => blockHeat(frame, from, x) - q, cold_K, from, tolerance);
+      t[j + 1] = top;
     }
-    return blockHeat(frames[k - 1], t, cold_K) - q;
+    return blockHeat(frames[k - 1], top, cold_K) - q;
   };
-  const t1 = brentRoot(march, cold_K, warm_K, tolerance);
-  march(t1); // leave the interfaces of the root in `temperatures`
-  return temperatures;
+  march(brentRoot(march, cold_K, warm_K, tolerance));
+  let mismatch = heatMismatch(frames, t);
+  for (let sweep = 1; mismatch > HEAT_AGREEMENT; sweep++) {
+    if (sweep > MAX_SWEEPS) {
+      if (mismatch > HEAT_AGREEMENT_FLOOR) throw new ThermalConvergenceError("Temperatures between blocks", MAX_SWEEPS, mismatch);
+      break;
+    }
+    for (let j = 1; j < k; j++) balance(j);
+    const next = heatMismatch(frames, t);
+    // Stop once the sweeps no longer improve: what is left is the blocks' own rounding.
+    if (next >= mismatch && next <= HEAT_AGREEMENT_FLOOR) break;
+    mismatch = next;
+  }
+  return t;
+}
+
+/** Largest difference between neighbouring blocks' heats, relative to the largest heat. */
+function heatMismatch(frames: BlockFrame[], t: number[]): number {
+  let worst = 0;
+  let previous = blockHeat(frames[0], t[0], t[1]);
+  let largest = Math.abs(previous);
+  for (let j = 1; j < frames.length; j++) {
+    const q = blockHeat(frames[j], t[j], t[j + 1]);
+    worst = Math.max(worst, Math.abs(q - previous));
+    largest = Math.max(largest, Math.abs(q));
+    previous = q;
+  }
+  return largest > 0 ? worst / largest : 0;
 }
 
 /**

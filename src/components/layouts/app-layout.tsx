@@ -13,6 +13,10 @@ type AppLayoutProps = {
   onSignOut: () => void;
   signingOut: boolean;
   signOutError?: string | null;
+  /** The signed-in person's own settings shown under their name (the units switch). */
+  accountControls?: ReactNode;
+  /** Screens that put a form and its results side by side use the full width. */
+  wide?: boolean;
   children: ReactNode;
 };
 
@@ -22,7 +26,7 @@ const itemBase = "flex items-center justify-between rounded-md px-3 py-2 text-sm
  * The signed-in frame: a left rail (a top block on narrow screens) with the mark, the screens
  * and who is signed in. It knows nothing of permissions: the route decides which items exist.
  */
-export function AppLayout({ nav, user, onSignOut, signingOut, signOutError, children }: AppLayoutProps) {
+export function AppLayout({ nav, user, onSignOut, signingOut, signOutError, accountControls, wide = false, children }: AppLayoutProps) {
   return (
     <div className="flex min-h-screen flex-col md:flex-row">
       <a href="#main" className="sr-only rounded-md bg-frost-400 px-3 py-2 text-ink-950 focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-10">
@@ -64,6 +68,7 @@ export function AppLayout({ nav, user, onSignOut, signingOut, signOutError, chil
               Role: <span className="font-medium capitalize text-ink-100">{user.role}</span>
             </p>
           </div>
+          {accountControls}
           <Button variant="secondary" size="sm" onClick={onSignOut} busy={signingOut}>
             Sign out
           </Button>
@@ -76,7 +81,7 @@ export function AppLayout({ nav, user, onSignOut, signingOut, signOutError, chil
       </aside>
       <div className="flex min-w-0 flex-1 flex-col">
         <main id="main" tabIndex={-1} className="flex-1 px-4 py-8 sm:px-8">
-          <div className="mx-auto max-w-5xl">{children}</div>
+          <div className={`mx-auto ${wide ? "max-w-[100rem]" : "max-w-5xl"}`}>{children}</div>
         </main>
         <CautionFooter />
       </div>

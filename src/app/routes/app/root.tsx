@@ -1,6 +1,6 @@
 import { useQueryClient, type QueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import { Navigate, Outlet, redirect, useLocation, useNavigate, type LoaderFunctionArgs } from "react-router-dom";
+import { Navigate, Outlet, redirect, useLocation, useMatches, useNavigate, type LoaderFunctionArgs } from "react-router-dom";
 import { can } from "../../../../shared/permissions";
 import type { Me } from "../../../../shared/schemas/auth";
 import { ErrorMessage } from "../../../components/errors/error-message";
@@ -9,7 +9,9 @@ import { Loading } from "../../../components/ui/spinner";
 import { paths } from "../../../config/paths";
 import { meQueryOptions, useMe } from "../../../features/auth/api/get-me";
 import { useSignOut } from "../../../features/auth/api/sign-out";
+import { UnitSwitch } from "../../../features/auth/components/unit-switch";
 import { RoleProvider } from "../../../lib/can";
+import { UnitSystemProvider } from "../../../lib/unit-system";
 
 /** The session guard: a signed-out visitor goes to sign in, and comes back here after. */
 export const clientLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
@@ -25,9 +27,9 @@ export const clientLoader = (queryClient: QueryClient) => async ({ request }: Lo
 function navFor(me: Me): NavItem[] {
   return [
     { label: "Overview", to: paths.app.overview.getHref() },
-    { label: "Designs" },
-    { label: "Compare" },
-    { label: "Library" },
+    { label: "Designs", to: paths.app.designs.getHref() },
+    { label: "Compare", to: paths.app.compare.getHref() },
+    { label: "Library", to: paths.app.library.getHref() },
     { label: "Tests" },
     { label: "Team", to: paths.app.team.getHref() },
     ...(me.localMail && can(me.role, "read:outbox") ? [{ label: "Outbox", to: paths.app.outbox.getHref() }] : []),
@@ -41,6 +43,8 @@ export default function AppRoot() {
   const queryClient = useQueryClient();
   const signOut = useSignOut();
   const [signOutError, setSignOutError] = useState<string | null>(null);
+  // A route asks for the full width with handle: { wide: true } (the Design page's form and results).
+  const wide = useMatches().some((m) => (m.handle as { wide?: boolean } | undefined)?.wide === true);
 
   if (me.error) return <div className="mx-auto max-w-xl p-8"><ErrorMessage error={me.error} title="Could not load your session" /></div>;
   if (me.isPending) return <Loading />;
@@ -62,9 +66,19 @@ export default function AppRoot() {
   const user = { name: me.data.user.name, organization: me.data.organization.name, role: me.data.role };
   return (
     <RoleProvider role={me.data.role}>
-      <AppLayout nav={navFor(me.data)} user={user} onSignOut={onSignOut} signingOut={signOut.isPending} signOutError={signOutError}>
-        <Outlet />
-      </AppLayout>
+      <UnitSystemProvider system={me.data.user.unitSystem}>
+        <AppLayout
+          nav={navFor(me.data)}
+          user={user}
+          onSignOut={onSignOut}
+          signingOut={signOut.isPending}
+          signOutError={signOutError}
+          accountControls={<UnitSwitch current={me.data.user.unitSystem} />}
+          wide={wide}
+        >
+          <Outlet />
+        </AppLayout>
+      </UnitSystemProvider>
     </RoleProvider>
   );
 }

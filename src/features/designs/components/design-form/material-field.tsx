@@ -24,10 +24,11 @@ const keyOf = (ref: unknown) => {
 /** A library pick: stores { materialId, version: currentVersion }, the exact version used. */
 export function MaterialField({ name, label, kind, noneLabel, hint, onPicked }: MaterialFieldProps) {
   const { control } = useFormContext<DesignContentInput>();
-  const { field, fieldState } = useController({ control, name });
+  // Taken apart: the compiler treats an object holding a ref as a ref, and would refuse the rest.
+  const { field: { ref, value: fieldValue, onChange, onBlur, name: fieldName }, fieldState } = useController({ control, name });
   const { picks, known } = useLibrary();
   const options = picks[kind];
-  const value = keyOf(field.value);
+  const value = keyOf(fieldValue);
   const offered = options.some((m) => `${m.id}@${m.currentVersion}` === value);
   // A revision may hold an older or retired version: keep showing it, named, until changed.
   const kept = value && !offered ? known.find((m) => `${m.materialId}@${m.version}` === value) : undefined;
@@ -35,15 +36,15 @@ export function MaterialField({ name, label, kind, noneLabel, hint, onPicked }: 
   return (
     <SelectField
       label={label}
-      name={field.name}
-      ref={field.ref}
+      name={fieldName}
+      ref={ref}
       value={value}
-      onBlur={field.onBlur}
+      onBlur={onBlur}
       hint={hint}
       error={fieldState.error?.message}
       onChange={(event) => {
         const entry = options.find((m) => `${m.id}@${m.currentVersion}` === event.target.value) ?? null;
-        field.onChange(entry ? refOf(entry) : noneLabel ? null : undefined);
+        onChange(entry ? refOf(entry) : noneLabel ? null : undefined);
         onPicked?.(entry);
       }}
     >

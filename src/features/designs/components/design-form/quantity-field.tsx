@@ -26,10 +26,11 @@ type QuantityFieldProps = {
  */
 export function QuantityField({ name, label, kind, suffix, hint, empty = undefined, disabled }: QuantityFieldProps) {
   const { control } = useFormContext<DesignContentInput>();
-  const { field, fieldState } = useController({ control, name });
+  // Taken apart: the compiler treats an object holding a ref as a ref, and would refuse the rest.
+  const { field: { ref, value: fieldValue, onChange, onBlur, name: fieldName }, fieldState } = useController({ control, name });
   const system = useUnitSystem();
   const [draft, setDraft] = useState<{ text: string; value: unknown; system: UnitSystem } | null>(null);
-  const text = draft && Object.is(draft.value, field.value) && draft.system === system ? draft.text : inputText(kind, field.value, system);
+  const text = draft && Object.is(draft.value, fieldValue) && draft.system === system ? draft.text : inputText(kind, fieldValue, system);
   const unit = kind ? unitLabel(kind, system) : suffix;
   const error = fieldState.error?.message;
 
@@ -38,15 +39,15 @@ export function QuantityField({ name, label, kind, suffix, hint, empty = undefin
       label={unit ? `${label} (${unit})` : label}
       inputMode="decimal"
       autoComplete="off"
-      name={field.name}
-      ref={field.ref}
+      name={fieldName}
+      ref={ref}
       value={text}
       disabled={disabled}
-      onBlur={field.onBlur}
+      onBlur={onBlur}
       onChange={(event) => {
         const value = parseInput(kind, event.target.value, system, empty);
         setDraft({ text: event.target.value, value, system });
-        field.onChange(value);
+        onChange(value);
       }}
       hint={hint}
       error={error ? localizeRange(error, kind, system) : undefined}

@@ -14,16 +14,17 @@ type End = "warm" | "cold" | number;
 /** From/to of a support: the warm wall, a stage (by its index among stages), or the cold vessel. */
 function EndSelect({ name, label, ends }: { name: FieldPath<DesignContentInput>; label: string; ends: { value: End; words: string }[] }) {
   const { control } = useFormContext<DesignContentInput>();
-  const { field, fieldState } = useController({ control, name });
+  // Taken apart: the compiler treats an object holding a ref as a ref, and would refuse the rest.
+  const { field: { ref, value: fieldValue, onChange, onBlur, name: fieldName }, fieldState } = useController({ control, name });
   return (
     <SelectField
       label={label}
-      name={field.name}
-      ref={field.ref}
-      value={String(field.value)}
-      onBlur={field.onBlur}
+      name={fieldName}
+      ref={ref}
+      value={String(fieldValue)}
+      onBlur={onBlur}
       error={fieldState.error?.message}
-      onChange={(event) => field.onChange(/^\d+$/.test(event.target.value) ? Number(event.target.value) : event.target.value)}
+      onChange={(event) => onChange(/^\d+$/.test(event.target.value) ? Number(event.target.value) : event.target.value)}
     >
       {ends.map((end) => (
         <option key={String(end.value)} value={String(end.value)}>

@@ -1,4 +1,8 @@
 import type { AssemblyResult } from "../../../../../shared/thermal/assembly";
+import { chartColors } from "../../../../components/charts/chart-theme";
+
+// Space bars are hatched so the two kinds differ by pattern, not only by colour.
+const hatch = (px: number) => ({ backgroundImage: `repeating-linear-gradient(45deg, ${chartColors.cautionText} 0 ${px}px, transparent ${px}px ${2 * px}px)` });
 
 type Ladder = AssemblyResult["resistances"][number];
 
@@ -26,8 +30,8 @@ function LadderBars({ ladder, title }: { ladder: Ladder; title: string }) {
             </span>
             <span className="h-2.5 rounded-sm bg-ink-800" aria-hidden="true">
               <span
-                className={`block h-full rounded-sm ${r.kind === "surface" ? "bg-frost-400" : "bg-[repeating-linear-gradient(45deg,var(--color-ember-300)_0_3px,transparent_3px_6px)]"}`}
-                style={{ width: `${Math.max(r.share * 100, 0.5)}%` }}
+                className={`block h-full rounded-sm ${r.kind === "surface" ? "bg-frost-400" : ""}`}
+                style={{ width: `${Math.max(r.share * 100, 0.5)}%`, ...(r.kind === "space" ? hatch(3) : {}) }}
               />
             </span>
             <span className="text-right font-mono text-ink-100">{pct(r.share)}</span>
@@ -47,7 +51,7 @@ export function ResistanceLadder({ result }: { result: AssemblyResult }) {
     <div className="space-y-5">
       <p className="flex gap-4 text-xs text-ink-300">
         <span className="flex items-center gap-1.5"><span className="inline-block size-2.5 rounded-sm bg-frost-400" aria-hidden="true" />surface (solid bar)</span>
-        <span className="flex items-center gap-1.5"><span className="inline-block size-2.5 rounded-sm bg-[repeating-linear-gradient(45deg,var(--color-ember-300)_0_2px,transparent_2px_4px)]" aria-hidden="true" />space (hatched bar)</span>
+        <span className="flex items-center gap-1.5"><span className="inline-block size-2.5 rounded-sm" style={hatch(2)} aria-hidden="true" />space (hatched bar)</span>
       </p>
       {result.resistances.map((l) => (
         <LadderBars key={`${l.segment}-${l.layupIndex}`} ladder={l} title={name(l)} />

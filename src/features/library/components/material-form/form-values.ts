@@ -1,5 +1,4 @@
-import type { MaterialKind, MaterialSource, MaterialVersion } from "../../../../../shared/schemas/material";
-import type { Emissivity } from "../../../../../shared/thermal/emissivity";
+import type { MaterialKind, MaterialSource } from "../../../../../shared/schemas/material";
 import type { CryogenId } from "../../../../../shared/thermal/fluids";
 import type { SupportMaterial } from "../../../../../shared/thermal/supports";
 
@@ -52,13 +51,13 @@ export type MaterialFormValues = {
   changeNote: string;
 };
 
-const text = (n: number | null | undefined) => (n === null || n === undefined ? "" : String(n));
+export const text = (n: number | null | undefined) => (n === null || n === undefined ? "" : String(n));
 /** "" is "not given"; anything else goes to the schema as a number (NaN is refused there, by name). */
 const num = (s: string) => (s.trim() === "" ? undefined : Number(s));
 const orNull = (s: string) => num(s) ?? null;
 const textOrNull = (s: string) => (s.trim() === "" ? null : s);
 
-const emptyModel = (): ModelForm => ({ kind: "constant", value: "", reference: "", referenceTemperature_K: "300", exponent: "0.5", points: [{ temperature_K: "", emissivity: "" }, { temperature_K: "", emissivity: "" }] });
+export const emptyModel = (): ModelForm => ({ kind: "constant", value: "", reference: "", referenceTemperature_K: "300", exponent: "0.5", points: [{ temperature_K: "", emissivity: "" }, { temperature_K: "", emissivity: "" }] });
 const emptySpec = (): SpecForm => ({ model: emptyModel(), banded: false, low: emptyModel(), high: emptyModel() });
 
 export function emptyValues(kind: MaterialKind = "reflector"): MaterialFormValues {
@@ -150,65 +149,5 @@ export function toInput(v: MaterialFormValues): unknown {
     cost_per_m2: orNull(v.cost_per_m2),
     source: toSource(v.source),
     changeNote: textOrNull(v.changeNote),
-  };
-}
-
-function fromModel(model: Emissivity | null | undefined): ModelForm {
-  const m = emptyModel();
-  if (model === null || model === undefined) return m;
-  if (typeof model === "number") return { ...m, kind: "constant", value: text(model) };
-  if (model.kind === "power") return { ...m, kind: "power", reference: text(model.reference), referenceTemperature_K: text(model.referenceTemperature_K), exponent: text(model.exponent) };
-  return { ...m, kind: "table", points: model.points.map(([t, e]) => ({ temperature_K: text(t), emissivity: text(e) })) };
-}
-const fromSpec = (s: { model: Emissivity; low?: Emissivity | null; high?: Emissivity | null }): SpecForm => ({
-  model: fromModel(s.model),
-  banded: Boolean(s.low || s.high),
-  low: fromModel(s.low ?? s.model),
-  high: fromModel(s.high ?? s.model),
-});
-
-/** A version as the form's starting point for a proposed change; the change note starts empty. */
-export function fromVersion(v: MaterialVersion): MaterialFormValues {
-  const values = emptyValues(v.properties.kind);
-  const p = v.properties;
-  const props = values.properties;
-  if (p.kind === "reflector") Object.assign(props, { form: p.form, warmSide: fromSpec(p.warmSide), coldSide: fromSpec(p.coldSide), sameFaces: JSON.stringify(p.warmSide) === JSON.stringify(p.coldSide) });
-  if (p.kind === "wall-finish") props.surface = fromSpec(p.surface);
-  if (p.kind === "spacer") {
-    const s = p.solidConduction;
-    props.form = p.form;
-    if (s && s.conductance_W_per_m2_K !== undefined) props.solidConduction = { ...props.solidConduction, mode: "conductance", conductance_W_per_m2_K: text(s.conductance_W_per_m2_K) };
-    else if (s) props.solidConduction = { mode: "conductivity", conductance_W_per_m2_K: "", conductivity_W_per_m_K: text(s.conductivity_W_per_m_K), thickness_m: text(s.thickness_m), contactFactor: text(s.contactFactor) };
-  }
-  if (p.kind === "support-material") props.supportMaterial = p.supportMaterial;
-  if (p.kind === "correlation-set") {
-    const c = p.coefficients;
-    Object.assign(props, { basedOn: p.basedOn ?? "", fittedEmissivity: text(p.fittedEmissivity), coefficients: { solid: text(c.solid), solidExponent: text(c.solidExponent), radiation: text(c.radiation), gas: text(c.gas), solidTemperatureTerm: c.solidTemperatureTerm ?? "" } });
-  }
-  if (p.kind === "cryogen") {
-    Object.assign(props, {
-      fluid: p.fluid,
-      saturationTemperature_K: text(p.saturationTemperature_K),
-      latentHeat_J_per_kg: text(p.latentHeat_J_per_kg),
-      liquidDensity_kg_per_m3: text(p.liquidDensity_kg_per_m3),
-      vapourDensity_kg_per_m3: text(p.vapourDensity_kg_per_m3),
-      molarMass_kg_per_mol: text(p.molarMass_kg_per_mol),
-    });
-  }
-  const s = v.source;
-  values.source = {
-    ...values.source,
-    type: s.type,
-    note: s.note ?? "",
-    ...(s.type === "citation" ? { author: s.author, title: s.title, year: text(s.year), location: s.location ?? "", fromMemory: s.fromMemory } : {}),
-    ...(s.type === "measured" ? { test: s.test } : {}),
-  };
-  return {
-    ...values,
-    name: v.name,
-    validRange_K: { min: text(v.validRange_K.min), max: text(v.validRange_K.max) },
-    thickness_m: text(v.thickness_m),
-    arealMass_kg_per_m2: text(v.arealMass_kg_per_m2),
-    cost_per_m2: text(v.cost_per_m2),
   };
 }

@@ -47,7 +47,6 @@ export function MaterialForm({ label, defaultValues, schema, kindLocked = false,
   const { register, handleSubmit, setError, setValue, control, formState } = form;
   const kind = useWatch({ control, name: "properties.kind" });
   const errors = messagesOf(formState.errors);
-  const errorOf = (path: string) => messagesOf({ [path]: path.split(".").reduce<unknown>((node, key) => (node as Record<string, unknown> | undefined)?.[key], formState.errors) } as FieldErrors)[0];
 
   const submit = handleSubmit(async (input) => {
     setFormError(null);
@@ -73,11 +72,19 @@ export function MaterialForm({ label, defaultValues, schema, kindLocked = false,
         ) : null}
         <div className="grid gap-4 sm:grid-cols-[2fr_1fr]">
           <TextField label="Name" hint="A generic name, 2 to 120 characters; no brand names." error={formState.errors.name?.message} {...register("name")} />
-          <SelectField label="Kind" disabled={kindLocked} hint={kindLocked ? "An entry's kind cannot change." : undefined} {...kindField}>
-            {MATERIAL_KINDS.map((k) => (
-              <option key={k} value={k}>{KIND_LABELS[k]}</option>
-            ))}
-          </SelectField>
+          {kindLocked ? (
+            <div className="space-y-1.5 text-sm">
+              <p className="font-medium text-ink-100">Kind</p>
+              <p className="py-2 text-ink-50">{KIND_LABELS[kind]}</p>
+              <p className="text-ink-300">An entry's kind cannot change.</p>
+            </div>
+          ) : (
+            <SelectField label="Kind" {...kindField}>
+              {MATERIAL_KINDS.map((k) => (
+                <option key={k} value={k}>{KIND_LABELS[k]}</option>
+              ))}
+            </SelectField>
+          )}
         </div>
         <section className="space-y-3" aria-label="Properties">
           <h2 className="text-sm font-semibold text-ink-50">Properties of the {KIND_LABELS[kind].toLowerCase()}</h2>
@@ -92,7 +99,7 @@ export function MaterialForm({ label, defaultValues, schema, kindLocked = false,
             <TextField label="Areal mass, kg/m² (optional)" inputMode="decimal" error={formState.errors.arealMass_kg_per_m2?.message} {...register("arealMass_kg_per_m2")} />
             <TextField label="Cost per m² (optional)" inputMode="decimal" error={formState.errors.cost_per_m2?.message} {...register("cost_per_m2")} />
           </div>
-          <GroupError message={errorOf("validRange_K")} />
+          <GroupError message={formState.errors.validRange_K?.message} />
         </fieldset>
         <SourceFields />
         <TextAreaField
