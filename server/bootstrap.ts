@@ -7,6 +7,7 @@ import { cookieSecure, type Env } from "./env";
 import { createLogger } from "./logger";
 import { createOutboxSender } from "./mail/outbox-sender";
 import { createMailTransport } from "./mail/transport";
+import { createObjectStore } from "./storage/object-store";
 import type { ServiceContext } from "./services/context";
 
 /** Everything the app needs, built from the parsed env. Tests call this with their own env. */
@@ -20,6 +21,7 @@ export function buildContext(env: Env): { ctx: ServiceContext; close: () => Prom
     logger,
     sessions: createSessionStore(db, cookieSecure(env)),
     outbox: undefined as unknown as ServiceContext["outbox"],
+    objects: createObjectStore(env),
     clock: () => new Date(),
   };
   // The sender reads the context's clock each time, so a test that moves the clock moves it too.
@@ -30,6 +32,7 @@ export function buildContext(env: Env): { ctx: ServiceContext; close: () => Prom
     async close() {
       await outbox.stop();
       transport.close();
+      ctx.objects.close();
       await pool.end();
     },
   };
@@ -39,6 +42,7 @@ export function buildContext(env: Env): { ctx: ServiceContext; close: () => Prom
 export async function startServer(env: Env): Promise<{ ctx: ServiceContext; server: Server; close: () => Promise<void> }> {
   const { ctx, close: closeContext } = buildContext(env);
   await runMigrations(ctx.db);
+  await ctx.objects.check();
   const app = createApp(ctx);
   const server = await new Promise<Server>((resolve, reject) => {
     const s = app.listen(env.PORT, env.HOST, () => resolve(s));

@@ -26,6 +26,17 @@ const EnvSchema = z.object({
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
   CLIENT_DIST: z.string().default("dist/client"),
+  /**
+   * Object storage for logger files and attachments: any S3-compatible service. The defaults
+   * point at the local S3 fake that `npm start` runs on loopback (s3rver's fixed credentials).
+   */
+  /** An empty value means the SDK's own endpoint for S3_REGION. */
+  S3_ENDPOINT: z.union([z.literal(""), z.url()], { error: "must be an http(s) URL, or empty for the SDK's default endpoint" }).default("http://127.0.0.1:4569"),
+  S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, "must be an S3 bucket name (3-63 lower-case letters, digits, dots, hyphens)").default("frostfold"),
+  S3_REGION: z.string().min(1).default("us-east-1"),
+  S3_ACCESS_KEY_ID: z.string().min(1).default("S3RVER"),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).default("S3RVER"),
+  S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("true").transform((v) => v === "true"),
 });
 export type Env = z.infer<typeof EnvSchema>;
 

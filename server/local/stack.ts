@@ -1,3 +1,4 @@
+import { rm } from "node:fs/promises";
 import path from "node:path";
 import { startServer } from "../bootstrap";
 import { createDb } from "../db/client";
@@ -9,6 +10,8 @@ import { newId } from "../ids";
 import { startSmtpFake } from "../mail/smtp-fake";
 import { hashPassword } from "../services/passwords";
 import { seedDemoDesigns } from "../services/demo-designs";
+import { seedDemoTests } from "../services/demo-tests";
+import { startS3Fake } from "../storage/s3-fake";
 import { dropDatabase, ensureDatabase, startLocalMariaDb } from "./mariadb";
 
 /**
@@ -22,6 +25,9 @@ export async function startLocalStack(options: {
   smtpPort: number;
   database: string;
   freshDatabase?: boolean;
+  /** The S3 fake's folder and port; by default beside the MariaDB folder (.data/mariadb → .data/s3). */
+  s3Dir?: string;
+  s3Port?: number;
   logLevel?: string;
   log: (line: string) => void;
 }) {
@@ -35,6 +41,13 @@ export async function startLocalStack(options: {
     await ensureDatabase(mariadb, options.database, "frostfold", "frostfold-local");
     const smtp = await startSmtpFake(options.smtpPort);
     stops.push(() => smtp.stop());
+    // A fresh database leaves no row pointing at old objects, so the bucket starts empty too.
+    // Without a port given, a fresh (browser-test) stack takes any free port, so it never
+    // collides with a running `npm start` on S3_PORT.
+    const s3Dir = options.s3Dir ?? path.join(path.dirname(options.dataDir), path.basename(options.dataDir).replace("mariadb", "s3"));
+    if (options.freshDatabase) await rm(s3Dir, { recursive: true, force: true });
+    const s3 = await startS3Fake({ port: options.s3Port ?? (options.freshDatabase ? 0 : Number(process.env.S3_PORT ?? 4569)), directory: s3Dir, bucket: "frostfold" });
+    stops.push(() => s3.stop());
     const origin = `http://127.0.0.1:${options.port}`;
     const env = parseEnv({
       ...process.env,
@@ -45,6 +58,12 @@ export async function startLocalStack(options: {
       MAIL_MODE: "local",
       SMTP_HOST: "127.0.0.1",
       SMTP_PORT: String(smtp.port),
+      S3_ENDPOINT: s3.endpoint,
+      S3_BUCKET: s3.bucket,
+      S3_REGION: "us-east-1",
+      S3_ACCESS_KEY_ID: "S3RVER",
+      S3_SECRET_ACCESS_KEY: "S3RVER",
+      S3_FORCE_PATH_STYLE: "true",
       LOG_LEVEL: options.logLevel ?? process.env.LOG_LEVEL ?? "warn",
       CLIENT_DIST: path.resolve("dist/client"),
     });
@@ -60,6 +79,7 @@ export async function startLocalStack(options: {
     const server = await startServer(env);
     stops.push(() => server.close());
     if (await seedDemoDesigns(server.ctx)) options.log("seeded the demo designs");
+    if (await seedDemoTests(server.ctx)) options.log("seeded the demo boil-off tests");
     return { origin, smtp, stop: stopAll };
   } catch (error) {
     await stopAll();

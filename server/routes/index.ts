@@ -1,12 +1,16 @@
 import { Router } from "express";
 import { notFound } from "../errors";
 import type { ServiceContext } from "../services/context";
+import { alertsRouter } from "./alerts";
 import { authRouter } from "./auth";
+import { boilOffTestsRouter } from "./boil-off-tests";
+import { calibrationRouter } from "./calibration";
 import { cryogensRouter } from "./cryogens";
 import { designsRouter, estimateRouter } from "./designs";
 import { healthRouter } from "./health";
 import { materialsRouter } from "./materials";
 import { outboxRouter } from "./outbox";
+import { settingsRouter } from "./settings";
 import { invitationsRouter, teamRouter } from "./team";
 
 /** Every router under /api. */
@@ -20,6 +24,10 @@ export function apiRouter(ctx: ServiceContext): Router {
   api.use("/materials", materialsRouter(ctx));
   api.use("/cryogens", cryogensRouter(ctx));
   api.use("/designs", designsRouter(ctx));
+  api.use("/designs", calibrationRouter(ctx));
+  api.use("/boil-off-tests", boilOffTestsRouter(ctx));
+  api.use("/alerts", alertsRouter(ctx));
+  api.use("/settings", settingsRouter(ctx));
   api.use(estimateRouter(ctx));
   api.use(() => {
     throw notFound("API route");

@@ -3,6 +3,7 @@ import type { SessionStore } from "../db/repositories/sessions";
 import type { Env } from "../env";
 import type { Logger } from "../logger";
 import type { OutboxSender } from "../mail/outbox-sender";
+import type { ObjectStore } from "../storage/object-store";
 import type { Role } from "../../shared/permissions";
 
 /** What every use case may reach. Built once in createApp; tests build their own. */
@@ -12,6 +13,8 @@ export interface ServiceContext {
   logger: Logger;
   sessions: SessionStore;
   outbox: OutboxSender;
+  /** Logger files, parsed series and attachments (S3-compatible). */
+  objects: ObjectStore;
   clock: () => Date;
 }
 

@@ -1,4 +1,7 @@
 import type { Server } from "node:http";
+import { mkdtemp, rm } from "node:fs/promises";
+import os from "node:os";
+import path from "node:path";
 import supertest from "supertest";
 import { inject } from "vitest";
 import { createApp } from "../../server/app";
@@ -9,6 +12,7 @@ import { parseEnv } from "../../server/env";
 import { newId } from "../../server/ids";
 import { startSmtpFake, type SmtpFake } from "../../server/mail/smtp-fake";
 import { hashPassword } from "../../server/services/passwords";
+import { startS3Fake, type S3Fake } from "../../server/storage/s3-fake";
 import type { Role } from "../../shared/permissions";
 import { resetDatabase } from "./database";
 
@@ -20,6 +24,9 @@ export const TEST_ORIGIN = "http://frostfold.test";
  */
 export async function startTestApp(envOverrides: Record<string, string> = {}) {
   const smtp: SmtpFake = await startSmtpFake(0);
+  // Each test file gets its own object store: an s3rver on port 0 in a temporary folder.
+  const s3Dir = await mkdtemp(path.join(os.tmpdir(), "frostfold-test-s3-"));
+  const s3: S3Fake = await startS3Fake({ port: 0, directory: s3Dir, bucket: "frostfold-test" });
   const env = parseEnv({
     NODE_ENV: "test",
     DATABASE_URL: inject("databaseUrl"),
@@ -31,6 +38,8 @@ export async function startTestApp(envOverrides: Record<string, string> = {}) {
     SIGN_IN_LIMIT_PER_EMAIL: "10000",
     CLIENT_DIST: "does-not-exist",
     COOKIE_SECURE: "false",
+    S3_ENDPOINT: s3.endpoint,
+    S3_BUCKET: s3.bucket,
     ...envOverrides,
   });
   const { ctx, close } = buildContext(env);
@@ -43,6 +52,7 @@ export async function startTestApp(envOverrides: Record<string, string> = {}) {
   return {
     ctx,
     smtp,
+    s3,
     server,
     agent,
     /** Empties every table and seeds the demo organization again. */
@@ -51,6 +61,7 @@ export async function startTestApp(envOverrides: Record<string, string> = {}) {
       await ctx.outbox.flush();
       await resetDatabase(ctx.db);
       smtp.clear();
+      await s3.reset();
       await seedDemo(ctx.db, { hashPassword, newId, now: new Date() });
       await seedLibrary(ctx.db, { newId, now: new Date() });
     },
@@ -72,6 +83,8 @@ export async function startTestApp(envOverrides: Record<string, string> = {}) {
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await close();
       await smtp.stop();
+      await s3.stop();
+      await rm(s3Dir, { recursive: true, force: true });
     },
   };
 }

@@ -33,7 +33,7 @@ export function CryogensTable({ cryogens }: { cryogens: Cryogen[] }) {
               <td className="py-2.5 pr-4 text-ink-100">{formatNumber(c.molarMass_kg_per_mol * 1000)}</td>
               <td className="py-2.5 pr-4 text-ink-100">{formatNumber(c.ventedGasFactor * 100, 3)} %</td>
               <td className="py-2.5 pr-4"><ScopeLabel scope={c.scope} /></td>
-              <td className="max-w-sm py-2.5 text-ink-300">{c.sourceText}</td>
+              <td className="min-w-80 py-2.5 text-xs leading-relaxed text-ink-300">{c.sourceText}</td>
             </tr>
           ))}
         </tbody>

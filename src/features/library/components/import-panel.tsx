@@ -11,12 +11,13 @@ import { isApiError } from "../../../lib/api-client";
 import { useImportMaterials, usePreviewImport } from "../api/import-materials";
 import { ImportPreviewTable } from "./import-preview-table";
 
-/** A file-level refusal (bad header, not UTF-8 …) lists each problem with its line. */
+/** A file-level refusal (bad header, not UTF-8 …) names each problem with its line. */
 function FileProblems({ error }: { error: unknown }) {
   return (
     <div className="space-y-2">
       <ErrorMessage error={error} title="The file cannot be imported" />
-      {isApiError(error) && error.fields.length > 0 ? (
+      {/* One problem is already in the message; more get a full list (the message shows five). */}
+      {isApiError(error) && error.fields.length > 1 ? (
         <ul className="list-disc pl-5 text-sm text-fault-200">{error.fields.map((f) => <li key={f.path + f.message}>{f.message}</li>)}</ul>
       ) : null}
     </div>

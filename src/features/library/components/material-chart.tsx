@@ -44,6 +44,7 @@ export function MaterialChart({ version }: { version: MaterialVersion }) {
           scale={chart.logScale ? "log" : "linear"}
           domain={chart.range}
           allowDataOverflow
+          ticks={isK ? chart.ticks : undefined}
           stroke="#9fb0c5"
           tickFormatter={(t: number) => formatNumber(t, 3)}
           label={{ value: "Temperature, K", position: "insideBottom", offset: -14, fill: "#c5d0de" }}

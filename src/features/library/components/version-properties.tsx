@@ -1,6 +1,5 @@
 import { formatSource, type EmissivitySpec, type MaterialProperties, type MaterialVersion } from "../../../../shared/schemas/material";
-import { CRYOGENS } from "../../../../shared/thermal/fluids";
-import { SUPPORT_MATERIALS } from "../../../../shared/thermal/supports";
+import { CRYOGENS, SUPPORT_MATERIALS } from "../../../../shared/thermal/index";
 import { describeEmissivity, formatNumber, formatRange } from "../utils/library-text";
 
 type Item = [term: string, value: string];

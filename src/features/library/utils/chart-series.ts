@@ -1,6 +1,7 @@
 import type { EmissivitySpec, MaterialProperties } from "../../../../shared/schemas/material";
-import { evaluateEmissivity, type Emissivity } from "../../../../shared/thermal/emissivity";
-import { EXTRAPOLATION_LIMIT_K, SUPPORT_MATERIALS, thermalConductivity } from "../../../../shared/thermal/supports";
+// The barrel leaves out the unchecked evaluation on purpose; the schema has validated these models.
+import { evaluateEmissivity } from "../../../../shared/thermal/emissivity";
+import { EXTRAPOLATION_LIMIT_K, SUPPORT_MATERIALS, thermalConductivity, type Emissivity } from "../../../../shared/thermal/index";
 
 export type Row = { temperature_K: number } & Record<string, number>;
 export type Series = { key: string; label: string; band?: "low" | "high"; face: number };
@@ -8,7 +9,19 @@ export type Marks = { key: string; label: string; face: number; points: { temper
 
 export type ChartSeries =
   | { quantity: "emissivity"; rows: Row[]; lines: Series[]; marks: Marks[]; logScale: false; range: [number, number] }
-  | { quantity: "conductivity"; rows: Row[]; lines: Series[]; marks: Marks[]; logScale: boolean; range: [number, number]; fitLabel: string };
+  | { quantity: "conductivity"; rows: Row[]; lines: Series[]; marks: Marks[]; logScale: boolean; range: [number, number]; fitLabel: string; ticks?: number[] };
+
+/** 1-2-5 steps on a log axis, inside [min, max] and with both ends, so the labels stay readable. */
+export function logTicks(min: number, max: number): number[] {
+  const out = new Set<number>([min, max]);
+  for (let decade = 10 ** Math.floor(Math.log10(min)); decade <= max; decade *= 10) {
+    for (const step of [1, 2, 5]) {
+      const t = Number((step * decade).toPrecision(3));
+      if (t > min * 1.15 && t < max / 1.15) out.add(t);
+    }
+  }
+  return [...out].sort((a, b) => a - b);
+}
 
 const SAMPLES = 64;
 
@@ -27,6 +40,8 @@ const tableMarks = (model: Emissivity, min: number, max: number) =>
     : [];
 
 function faces(p: MaterialProperties): [string, string, EmissivitySpec][] {
+  // Metallized on both sides usually means one model twice: draw it once, named for both.
+  if (p.kind === "reflector" && JSON.stringify(p.warmSide) === JSON.stringify(p.coldSide)) return [["warmSide", "Both faces", p.warmSide]];
   if (p.kind === "reflector") return [["warmSide", "Warm face", p.warmSide], ["coldSide", "Cold face", p.coldSide]];
   if (p.kind === "wall-finish") return [["surface", "Surface", p.surface]];
   return [];
@@ -46,7 +61,7 @@ export function chartSeries(p: MaterialProperties, range: { min: number; max: nu
     if (!(max > min)) return null;
     const log = max / min >= 10;
     const rows = temperatures(min, max, log).map((T) => ({ temperature_K: T, k: thermalConductivity(p.supportMaterial, T) }));
-    return { quantity: "conductivity", rows, lines: [{ key: "k", label: "Thermal conductivity", face: 0 }], marks: [], logScale: log, range: [min, max], fitLabel: fit.fitSource };
+    return { quantity: "conductivity", rows, lines: [{ key: "k", label: "Thermal conductivity", face: 0 }], marks: [], logScale: log, range: [min, max], fitLabel: fit.fitSource, ticks: log ? logTicks(min, max) : undefined };
   }
   const list = faces(p);
   if (list.length === 0 || !(range.max > range.min)) return null;

@@ -1,5 +1,5 @@
 import { formatSource, type MaterialVersion } from "../../../../shared/schemas/material";
-import type { Emissivity } from "../../../../shared/thermal/emissivity";
+import type { Emissivity } from "../../../../shared/thermal/index";
 import { describeEmissivity, formatNumber, formatRange } from "./library-text";
 
 export type FieldChange = { field: string; from: string; to: string };

@@ -1,5 +1,5 @@
 import type { MaterialKind } from "../../../../shared/schemas/material";
-import type { Emissivity } from "../../../../shared/thermal/emissivity";
+import type { Emissivity } from "../../../../shared/thermal/index";
 
 /** Plain words for each kind, singular and plural, used in filters, tables and headings. */
 export const KIND_LABELS: Record<MaterialKind, string> = {

@@ -1,7 +1,14 @@
 import { useFormContext } from "react-hook-form";
-import { CORRELATION_SETS } from "../../../../../shared/thermal/blanket-correlation";
-import { CRYOGEN_IDS, CRYOGENS, type CryogenId } from "../../../../../shared/thermal/fluids";
-import { EXTRAPOLATION_LIMIT_K, SUPPORT_MATERIAL_IDS, SUPPORT_MATERIALS, type SupportMaterial } from "../../../../../shared/thermal/supports";
+import {
+  CORRELATION_SETS,
+  CRYOGEN_IDS,
+  CRYOGENS,
+  EXTRAPOLATION_LIMIT_K,
+  SUPPORT_MATERIAL_IDS,
+  SUPPORT_MATERIALS,
+  type CryogenId,
+  type SupportMaterial,
+} from "../../../../../shared/thermal/index";
 import { SelectField, TextField } from "../../../../components/ui/field";
 import type { MaterialFormValues } from "./form-values";
 import { useErrorOf } from "./use-error-of";

@@ -1,6 +1,5 @@
 import type { MaterialKind, MaterialSource } from "../../../../../shared/schemas/material";
-import type { CryogenId } from "../../../../../shared/thermal/fluids";
-import type { SupportMaterial } from "../../../../../shared/thermal/supports";
+import type { CryogenId, SupportMaterial } from "../../../../../shared/thermal/index";
 
 /**
  * The form's own shape. Numbers are kept as the text typed (so a bad entry stays on screen and

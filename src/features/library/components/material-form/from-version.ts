@@ -1,5 +1,5 @@
 import type { MaterialVersion } from "../../../../../shared/schemas/material";
-import type { Emissivity } from "../../../../../shared/thermal/emissivity";
+import type { Emissivity } from "../../../../../shared/thermal/index";
 import { emptyModel, emptyValues, text, type MaterialFormValues, type ModelForm, type SpecForm } from "./form-values";
 
 function fromModel(model: Emissivity | null | undefined): ModelForm {

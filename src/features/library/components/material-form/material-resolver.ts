@@ -15,8 +15,11 @@ export function materialResolver(schema: VersionSchema): Resolver<MaterialFormVa
     const result = await schema.safeParseAsync(toInput(values));
     if (result.success) return { values: result.data, errors: {} };
     const flat: Record<string, FieldError> = {};
+    // With both faces alike the cold face is a copy of the warm one: its issues would repeat them.
+    const copiedCold = values.properties.kind === "reflector" && values.properties.sameFaces;
     for (const issue of result.error.issues) {
       const path = issue.path.map(String).join(".") || "root";
+      if (copiedCold && path.startsWith("properties.coldSide")) continue;
       flat[path] ??= { type: issue.code, message: issue.message };
     }
     return { values: {}, errors: toNestErrors(flat, options) };

@@ -1,0 +1,176 @@
+import type { DesignContent } from "../../shared/schemas/design";
+import type { CreateTestInput, LogInfo, StoredFile, TestDetail, TestStatus, TestSummary } from "../../shared/schemas/boil-off-test";
+import { CRYOGEN_IDS, DEFAULT_VENT_REFERENCE, type CryogenId } from "../../shared/thermal";
+import type { ResolvedMaterial } from "../../shared/design/to-assembly";
+import { insertAuditEntry } from "../db/repositories/audit";
+import * as repo from "../db/repositories/boil-off-tests";
+import { findRevision } from "../db/repositories/designs";
+import type { Tx } from "../db/client";
+import { conflict, invalidInput, notFound } from "../errors";
+import { newId } from "../ids";
+import { raiseAlertIfOver } from "./alerts";
+import type { Actor, ServiceContext } from "./context";
+
+/** A test of this organization, or a 404 that does not tell whether it exists elsewhere. */
+export async function loadTest(db: Tx, actor: Actor, id: string, lock = false) {
+  const row = await repo.findTest(db, actor.organizationId, id, lock);
+  if (!row) throw notFound("boil-off test");
+  return row;
+}
+
+const iso = (d: Date | null) => (d ? d.toISOString() : null);
+
+const summaryOf = (t: Omit<TestSummary, "testedAt" | "createdAt" | "method" | "status"> & { method: TestSummary["method"]; status: TestStatus; testedAt: Date; createdAt: Date }): TestSummary => ({
+  ...t,
+  testedAt: t.testedAt.toISOString(),
+  createdAt: t.createdAt.toISOString(),
+});
+
+export async function listTests(ctx: ServiceContext, actor: Actor, filter: { designId?: string; status?: TestStatus }): Promise<TestSummary[]> {
+  return (await repo.listTests(ctx.db, actor.organizationId, filter)).map(summaryOf);
+}
+
+const fileOf = (f: repo.TestFileRow, uploadedBy: string | null): StoredFile => ({
+  id: f.id,
+  filename: f.filename,
+  contentType: f.contentType,
+  size_bytes: f.sizeBytes,
+  sha256: f.sha256,
+  uploadedAt: f.uploadedAt.toISOString(),
+  uploadedBy,
+});
+
+export async function getTest(ctx: ServiceContext, actor: Actor, id: string): Promise<TestDetail> {
+  const { test: t, designName, createdBy, acceptedBy } = await loadTest(ctx.db, actor, id);
+  const files = await repo.listTestFiles(ctx.db, actor.organizationId, id);
+  const logFile = t.log ? files.find((f) => f.file.id === t.log!.fileId) : undefined;
+  let log: LogInfo | null = null;
+  if (t.log && logFile) {
+    const { fileId: _fileId, seriesKey: _key, seriesBytes: _bytes, pressureColumn, pressureUnit, ...mapping } = t.log;
+    log = { ...fileOf(logFile.file, logFile.uploadedBy), ...mapping, pressureColumn: pressureColumn ?? null, pressureUnit: pressureUnit ?? null, seriesUnit: t.chart?.unit ?? "" };
+  }
+  return {
+    ...summaryOf({ ...t, designName, createdBy }),
+    cryogen: t.cryogen as CryogenId,
+    ventReference: t.ventReference,
+    capacity_L: t.capacity_L,
+    fullScale_mm: t.fullScale_mm,
+    ambientTemperature_K: t.ambientTemperature_K,
+    ambientPressure_Pa: t.ambientPressure_Pa,
+    notes: t.notes,
+    log,
+    window: t.windowStart_s !== null && t.windowEnd_s !== null ? { start_s: t.windowStart_s, end_s: t.windowEnd_s } : null,
+    windowSuggested: t.windowSuggested,
+    analysis: t.analysis,
+    attachments: files.filter((f) => f.file.kind === "attachment").map((f) => fileOf(f.file, f.uploadedBy)),
+    acceptedAt: iso(t.acceptedAt),
+    acceptedBy,
+  };
+}
+
+/** The stage's cryogen as the engine names it, from the exact library version the revision used. */
+function stageCryogen(content: DesignContent, materials: ResolvedMaterial[], layupIndex: number | null): CryogenId | null {
+  const item = layupIndex === null ? null : content.layup[layupIndex];
+  const ref = layupIndex === null ? content.cold.cryogen : item?.kind === "stage" ? item.cryogen : null;
+  if (!ref) return null;
+  const found = materials.find((m) => m.materialId === ref.materialId && m.version === ref.version);
+  const fluid = found?.properties.kind === "cryogen" ? found.properties.fluid : null;
+  return fluid && (CRYOGEN_IDS as string[]).includes(fluid) ? fluid : null;
+}
+
+function stageCapacity(content: DesignContent, layupIndex: number | null): number | null {
+  if (layupIndex === null) return content.cold.capacity_L ?? null;
+  const item = content.layup[layupIndex];
+  return item?.kind === "stage" ? (item.capacity_L ?? null) : null;
+}
+
+export async function createTest(ctx: ServiceContext, actor: Actor, input: CreateTestInput): Promise<TestDetail> {
+  const found = await findRevision(ctx.db, actor.organizationId, input.designId, input.revision);
+  if (!found) throw notFound("design revision");
+  const { content, materials, prediction } = found.revision;
+  const stages = prediction.result.stages;
+  const stageIndex = input.stageIndex ?? stages.length - 1;
+  const listed = stages.map((s, i) => `${i} ${s.label}`).join(", ");
+  if (stageIndex >= stages.length) {
+    const message = `stageIndex must be from 0 to ${stages.length - 1} for this revision (${listed})`;
+    throw invalidInput(message, [{ path: "stageIndex", message }]);
+  }
+  const stage = stages[stageIndex];
+  const cryogen = stageCryogen(content, materials, stage.layupIndex);
+  if (!cryogen) {
+    const message = `stageIndex ${stageIndex} (${stage.label}) has no cryogen in revision ${input.revision}, so there is no boil-off to measure; pick a stage with one (${listed})`;
+    throw invalidInput(message, [{ path: "stageIndex", message }]);
+  }
+  const capacity_L = input.capacity_L ?? stageCapacity(content, stage.layupIndex);
+  if (input.method === "level" && capacity_L === null) {
+    const message = "capacity_L is required for a level test: the design gives no capacity for this stage";
+    throw invalidInput(message, [{ path: "capacity_L", message }]);
+  }
+  const id = newId();
+  const now = ctx.clock();
+  await ctx.db.transaction(async (tx) => {
+    await repo.insertTest(tx, actor.organizationId, {
+      id,
+      designId: input.designId,
+      revision: input.revision,
+      stageIndex,
+      stageLabel: stage.label,
+      cryogen,
+      predictedHeatLeak_W: stage.net_W,
+      predictedEvaporationRate: stage.boilOff?.evaporationRate_percent_per_day ?? null,
+      method: input.method,
+      vesselLabel: input.vesselLabel,
+      ventReference: input.method === "vent-flow" ? (input.ventReference ?? DEFAULT_VENT_REFERENCE) : null,
+      capacity_L,
+      fullScale_mm: input.fullScale_mm ?? null,
+      ambientTemperature_K: input.ambientTemperature_K ?? null,
+      ambientPressure_Pa: input.ambientPressure_Pa ?? null,
+      notes: input.notes ?? "",
+      status: "logging",
+      testedAt: now,
+      createdByUserId: actor.userId,
+      createdAt: now,
+      updatedAt: now,
+    });
+    await insertAuditEntry(tx, actor.organizationId, { actorUserId: actor.userId, action: "test.create", entityType: "boil_off_test", entityId: id, detail: { designId: input.designId, revision: input.revision, stageIndex, method: input.method } }, now);
+  });
+  return getTest(ctx, actor, id);
+}
+
+export async function updateNotes(ctx: ServiceContext, actor: Actor, id: string, notes: string): Promise<TestDetail> {
+  const now = ctx.clock();
+  await ctx.db.transaction(async (tx) => {
+    await loadTest(tx, actor, id, true);
+    await repo.updateTest(tx, actor.organizationId, id, { notes, updatedAt: now });
+    await insertAuditEntry(tx, actor.organizationId, { actorUserId: actor.userId, action: "test.notes", entityType: "boil_off_test", entityId: id, detail: { length: notes.length } }, now);
+  });
+  return getTest(ctx, actor, id);
+}
+
+/** Rows go in one transaction; the objects after it commits (an orphan object harms nobody, a dangling row would). */
+export async function deleteTest(ctx: ServiceContext, actor: Actor, id: string): Promise<void> {
+  const now = ctx.clock();
+  const keys = await ctx.db.transaction(async (tx) => {
+    const { test } = await loadTest(tx, actor, id, true);
+    const files = await repo.listTestFiles(tx, actor.organizationId, id);
+    await repo.deleteTest(tx, actor.organizationId, id);
+    await insertAuditEntry(tx, actor.organizationId, { actorUserId: actor.userId, action: "test.delete", entityType: "boil_off_test", entityId: id, detail: { vesselLabel: test.vesselLabel, files: files.length } }, now);
+    return [...files.map((f) => f.file.objectKey), ...(test.log ? [test.log.seriesKey] : [])];
+  });
+  await ctx.objects.delete(keys).catch((error: Error) => ctx.logger.warn({ err: error, keys }, "objects of a deleted test were left in the store"));
+}
+
+/** Signs the analysis off; an accepted test is frozen, and one over the threshold raises an alert. */
+export async function acceptTest(ctx: ServiceContext, actor: Actor, id: string): Promise<TestDetail> {
+  const now = ctx.clock();
+  const alerted = await ctx.db.transaction(async (tx) => {
+    const { test, designName } = await loadTest(tx, actor, id, true);
+    if (test.status === "accepted") throw conflict("already_accepted", "This test is already accepted.");
+    if (test.status !== "analysed" || !test.analysis) throw conflict("no_analysis", "Upload a logger file first: there is no analysis to accept.");
+    await repo.updateTest(tx, actor.organizationId, id, { status: "accepted", acceptedAt: now, acceptedByUserId: actor.userId, updatedAt: now });
+    await insertAuditEntry(tx, actor.organizationId, { actorUserId: actor.userId, action: "test.accept", entityType: "boil_off_test", entityId: id, detail: { ratio: test.ratio, window: test.analysis.window } }, now);
+    return raiseAlertIfOver(ctx, tx, actor, { test, designName, analysis: test.analysis }, now);
+  });
+  if (alerted) ctx.outbox.kick();
+  return getTest(ctx, actor, id);
+}
