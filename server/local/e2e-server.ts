@@ -3,7 +3,8 @@ import { startLocalStack } from "./stack";
 // Playwright's webServer: its own data folder and ports, a fresh database every run.
 const port = Number(process.env.E2E_PORT ?? 3100);
 const stack = await startLocalStack({
-  dataDir: ".data/e2e-mariadb",
+  // E2E_DATA_DIR lets two browser-test runs on one machine keep apart (each stops a stale server in its folder).
+  dataDir: process.env.E2E_DATA_DIR ?? ".data/e2e-mariadb",
   port,
   dbPort: Number(process.env.E2E_DB_PORT ?? 3327),
   smtpPort: Number(process.env.E2E_SMTP_PORT ?? 2545),

@@ -14,6 +14,12 @@ import { seedDemoTests } from "../services/demo-tests";
 import { startS3Fake } from "../storage/s3-fake";
 import { dropDatabase, ensureDatabase, startLocalMariaDb } from "./mariadb";
 
+/** The S3 fake's folder beside MariaDB's: .data/mariadb → .data/s3, .data/e2e-x → .data/e2e-x-s3; never the same folder. */
+function s3DirBeside(dataDir: string): string {
+  const name = path.basename(dataDir);
+  return path.join(path.dirname(dataDir), name.includes("mariadb") ? name.replace("mariadb", "s3") : `${name}-s3`);
+}
+
 /**
  * The whole product on one machine: its own MariaDB, the SMTP fake, migrations, the demo seed
  * and the server. `npm start` and the browser tests both run this, with different folders and ports.
@@ -44,7 +50,7 @@ export async function startLocalStack(options: {
     // A fresh database leaves no row pointing at old objects, so the bucket starts empty too.
     // Without a port given, a fresh (browser-test) stack takes any free port, so it never
     // collides with a running `npm start` on S3_PORT.
-    const s3Dir = options.s3Dir ?? path.join(path.dirname(options.dataDir), path.basename(options.dataDir).replace("mariadb", "s3"));
+    const s3Dir = options.s3Dir ?? s3DirBeside(options.dataDir);
     if (options.freshDatabase) await rm(s3Dir, { recursive: true, force: true });
     const s3 = await startS3Fake({ port: options.s3Port ?? (options.freshDatabase ? 0 : Number(process.env.S3_PORT ?? 4569)), directory: s3Dir, bucket: "frostfold" });
     stops.push(() => s3.stop());

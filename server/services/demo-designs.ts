@@ -53,7 +53,7 @@ function heliumCryostat(r: Awaited<ReturnType<typeof seedRefs>>, warmLayers: num
         ]
       : [],
     vacuum: { pressure_Pa: 1e-4, gas: "helium" },
-    targetColdHeat_W: 0.35,
+    targetColdHeat_W: 0.15,
   };
 }
 

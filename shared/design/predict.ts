@@ -25,17 +25,20 @@ export function predictDesign(content: DesignContent, lookup: (ref: MaterialRef)
 }
 
 /**
- * Heat into the cold vessel against the layer count of the design's thickest block, from 1 to
- * twice its count (at most 200), in up to 40 steps; with a target, the fewest layers meeting it.
+ * Heat into the cold vessel against the layer count of the thickest block facing the cold vessel
+ * (after the last cooled stage: a stage's fixed temperature shields the vessel from the blocks
+ * outside it), from 1 to twice its count (at most 200), in up to 40 steps; with a target, the
+ * fewest layers meeting it.
  */
 function layerSweep(assembly: AssemblyDesign, target: number | null): LayerSweep | null {
   let layupIndex = -1;
   let layers = 0;
   let otherShields = 0;
+  const lastStage = assembly.layup.findLastIndex((item) => item.kind === "stage");
   assembly.layup.forEach((item, i) => {
     const n = item.kind === "block" ? item.layers : 1;
     otherShields += n;
-    if (item.kind === "block" && item.layers > layers) {
+    if (item.kind === "block" && i > lastStage && item.layers > layers) {
       layers = item.layers;
       layupIndex = i;
     }

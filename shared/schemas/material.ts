@@ -62,9 +62,18 @@ const ReflectorSchema = z.object({
 
 // The layer-by-layer model takes either a conductance per gap or a conductivity with thickness
 // and contact factor; one flat object keeps the messages plain, the transform gives the engine's shape.
+/**
+ * A spacer's solid conduction per gap: a conductance, or a bulk conductivity over a thickness.
+ * A conductance may say where it was taken: at a mean temperature (it then scales with each
+ * gap's mean temperature) and at a layer density with its exponent (it then scales as
+ * (N̄/N̄_ref)^a), the form h_s = C_s·N̄^a·T_m of the 1974 correlation's solid term.
+ */
 const SolidConductionSchema = z
   .object({
     conductance_W_per_m2_K: positive("solidConduction.conductance_W_per_m2_K", "W/(m²·K)", 1000).optional(),
+    referenceMeanTemperature_K: positive("solidConduction.referenceMeanTemperature_K", "K", 400).optional(),
+    referenceLayerDensity_per_cm: positive("solidConduction.referenceLayerDensity_per_cm", "layers/cm", 100).optional(),
+    layerDensityExponent: atLeastZero("solidConduction.layerDensityExponent", 5).optional(),
     conductivity_W_per_m_K: positive("solidConduction.conductivity_W_per_m_K", "W/(m·K)", 500).optional(),
     thickness_m: positive("solidConduction.thickness_m", "m", 0.01).optional(),
     contactFactor: positive("solidConduction.contactFactor", "(a fraction)", 1).optional(),
@@ -72,15 +81,32 @@ const SolidConductionSchema = z
   .superRefine((v, ctx) => {
     const byConductance = v.conductance_W_per_m2_K !== undefined;
     const byConductivity = v.conductivity_W_per_m_K !== undefined || v.thickness_m !== undefined || v.contactFactor !== undefined;
-    const message = "solidConduction needs either conductance_W_per_m2_K alone, or conductivity_W_per_m_K with thickness_m (and an optional contactFactor)";
+    const message = "solidConduction needs either conductance_W_per_m2_K (with optional reference conditions), or conductivity_W_per_m_K with thickness_m (and an optional contactFactor)";
     if (byConductance === byConductivity) ctx.addIssue({ code: "custom", message });
     else if (byConductivity && (v.conductivity_W_per_m_K === undefined || v.thickness_m === undefined)) {
       ctx.addIssue({ code: "custom", message, path: [v.conductivity_W_per_m_K === undefined ? "conductivity_W_per_m_K" : "thickness_m"] });
     }
+    const references = [v.referenceMeanTemperature_K, v.referenceLayerDensity_per_cm, v.layerDensityExponent].some((x) => x !== undefined);
+    if (byConductivity && references) {
+      ctx.addIssue({ code: "custom", message: "solidConduction's reference temperature and layer density go with a conductance, not a conductivity", path: ["conductance_W_per_m2_K"] });
+    }
+    if ((v.referenceLayerDensity_per_cm === undefined) !== (v.layerDensityExponent === undefined)) {
+      ctx.addIssue({
+        code: "custom",
+        message: "solidConduction.referenceLayerDensity_per_cm and solidConduction.layerDensityExponent go together: give both or neither",
+        path: [v.referenceLayerDensity_per_cm === undefined ? "referenceLayerDensity_per_cm" : "layerDensityExponent"],
+      });
+    }
   })
   .transform((v) =>
     v.conductance_W_per_m2_K !== undefined
-      ? { conductance_W_per_m2_K: v.conductance_W_per_m2_K }
+      ? {
+          conductance_W_per_m2_K: v.conductance_W_per_m2_K,
+          ...(v.referenceMeanTemperature_K !== undefined ? { referenceMeanTemperature_K: v.referenceMeanTemperature_K } : {}),
+          ...(v.referenceLayerDensity_per_cm !== undefined && v.layerDensityExponent !== undefined
+            ? { referenceLayerDensity_per_cm: v.referenceLayerDensity_per_cm, layerDensityExponent: v.layerDensityExponent }
+            : {}),
+        }
       : { conductivity_W_per_m_K: v.conductivity_W_per_m_K!, thickness_m: v.thickness_m!, ...(v.contactFactor !== undefined ? { contactFactor: v.contactFactor } : {}) },
   );
 

@@ -71,7 +71,12 @@ export const BlanketCoefficientsSchema = z.object(
 
 const SpacerSchema = z.union(
   [
-    z.object({ conductance_W_per_m2_K: above(0, "W/(m²·K)") }),
+    z.object({
+      conductance_W_per_m2_K: above(0, "W/(m²·K)"),
+      referenceMeanTemperature_K: above(0, "K").optional(),
+      referenceLayerDensity_per_cm: above(0, "layers/cm").optional(),
+      layerDensityExponent: inRange(0, 5).optional(),
+    }),
     z.object({
       conductivity_W_per_m_K: above(0, "W/(m·K)"),
       thickness_m: above(0, "m").optional(),

@@ -60,10 +60,13 @@ export type BlockModel = "radiation" | "correlation" | "layers";
 /**
  * Solid conduction through the spacer of a "layers" block, per gap: a conductance, or a bulk
  * conductivity over a thickness (default the blanket's pitch, 1 cm / layer density) times the
- * share that survives the point contacts (contactFactor, default 1).
+ * share that survives the point contacts (contactFactor, default 1). A conductance may name the
+ * mean temperature it was taken at (it then scales with each gap's mean temperature) and the
+ * layer density (it then scales as (N̄/N̄_ref)^exponent with the block's density): together the
+ * form h_s = C_s·N̄^a·T_m of Cunnington, Keller & Glassford (NASA CR-134477, 1974).
  */
 export type AssemblySpacer =
-  | { conductance_W_per_m2_K: number }
+  | { conductance_W_per_m2_K: number; referenceMeanTemperature_K?: number; referenceLayerDensity_per_cm?: number; layerDensityExponent?: number }
   | { conductivity_W_per_m_K: number; thickness_m?: number; contactFactor?: number };
 
 /** N layers of one reflector, modelled one way. */

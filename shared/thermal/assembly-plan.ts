@@ -187,7 +187,9 @@ function validateBlock(item: LayupBlock, field: string, layupIndex: number, pres
   if (!MODELS.includes(item.model)) throw new ThermalInputError(`${field}.model`, item.model, `one of ${MODELS.join(", ")}`);
   const density = item.layerDensity_per_cm === undefined ? undefined : requireAbove(`${field}.layerDensity_per_cm`, item.layerDensity_per_cm, 0, "layers/cm");
   const spacer = item.spacer === undefined ? undefined : validateSpacer(item.spacer, `${field}.spacer`);
-  const needsDensity = item.model === "correlation" || (item.model === "layers" && spacer !== undefined && "conductivity_W_per_m_K" in spacer && spacer.thickness_m === undefined);
+  const spacerNeedsDensity =
+    spacer !== undefined && ("conductivity_W_per_m_K" in spacer ? spacer.thickness_m === undefined : spacer.referenceLayerDensity_per_cm !== undefined);
+  const needsDensity = item.model === "correlation" || (item.model === "layers" && spacerNeedsDensity);
   if (needsDensity && density === undefined) {
     throw new ThermalInputError(`${field}.layerDensity_per_cm`, density, `a number above 0 layers/cm (the ${item.model} model needs the layer density)`);
   }
@@ -209,7 +211,22 @@ export const TORR_PA = 101_325 / 760;
 function validateSpacer(spacer: AssemblySpacer, field: string): AssemblySpacer {
   requireObject(field, spacer, "a spacer { conductance_W_per_m2_K } or { conductivity_W_per_m_K, thickness_m?, contactFactor? }");
   if ("conductance_W_per_m2_K" in spacer) {
-    return { conductance_W_per_m2_K: requireAbove(`${field}.conductance_W_per_m2_K`, spacer.conductance_W_per_m2_K, 0, "W/(m²·K)") };
+    const conductance_W_per_m2_K = requireAbove(`${field}.conductance_W_per_m2_K`, spacer.conductance_W_per_m2_K, 0, "W/(m²·K)");
+    const optional = (name: "referenceMeanTemperature_K" | "referenceLayerDensity_per_cm", unit: string) =>
+      spacer[name] === undefined ? {} : { [name]: requireAbove(`${field}.${name}`, spacer[name], 0, unit) };
+    const exponent = spacer.layerDensityExponent;
+    if (exponent !== undefined && (typeof exponent !== "number" || !Number.isFinite(exponent) || exponent < 0 || exponent > 5)) {
+      throw new ThermalInputError(`${field}.layerDensityExponent`, exponent, "a number from 0 to 5");
+    }
+    if ((spacer.referenceLayerDensity_per_cm === undefined) !== (exponent === undefined)) {
+      throw new ThermalInputError(`${field}.layerDensityExponent`, exponent, "given together with referenceLayerDensity_per_cm, or both left out");
+    }
+    return {
+      conductance_W_per_m2_K,
+      ...optional("referenceMeanTemperature_K", "K"),
+      ...optional("referenceLayerDensity_per_cm", "layers/cm"),
+      ...(exponent === undefined ? {} : { layerDensityExponent: exponent }),
+    };
   }
   const conductivity_W_per_m_K = requireAbove(`${field}.conductivity_W_per_m_K`, spacer.conductivity_W_per_m_K, 0, "W/(m·K)");
   const thickness_m = spacer.thickness_m === undefined ? undefined : requireAbove(`${field}.thickness_m`, spacer.thickness_m, 0, "m");

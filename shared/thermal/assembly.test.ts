@@ -202,6 +202,30 @@ describe("estimateAssembly with supports, blankets and boil-off", () => {
     expect(result.blocks[0].shieldTemperatures_K).toHaveLength(15);
   });
 
+  it("a layers block scales a spacer conductance to its layer density and mean temperature, as h_s = C_s·N̄^a·T_m", () => {
+    // The solid term of Cunnington, Keller & Glassford (NASA CR-134477, 1974): per gap
+    // h_s ∝ N̄^a·T_m. Taken at 20 layers/cm and 188.5 K, used at 10 layers/cm: (10/20)^2.63 of it.
+    const spacer = { conductance_W_per_m2_K: 0.0364, referenceMeanTemperature_K: 188.5, referenceLayerDensity_per_cm: 20, layerDensityExponent: 2.63 };
+    const design = planar([block(15, { model: "layers", layerDensity_per_cm: 10, spacer })], { cold: heliumCold });
+    const result = estimateAssembly(design);
+    const direct = estimateLayers({
+      area_m2: 1,
+      warm: design.warm,
+      cold: heliumCold,
+      layers: 15,
+      reflector: film(),
+      spacer: { conductance_W_per_m2_K: 0.0364 * 0.5 ** 2.63, referenceTemperature_K: 188.5 },
+      gas: { gas: "nitrogen", pressure_Pa: 1e-4 },
+    });
+    close(result.stages[0].heatIn.total_W, direct.heatLeak_W, 1e-9);
+    close(result.stages[0].heatIn.solid_W, direct.solid_W, 1e-9);
+  });
+
+  it("refuses a spacer's density exponent without its reference density, naming the field", () => {
+    const spacer = { conductance_W_per_m2_K: 0.0364, layerDensityExponent: 2.63 };
+    expect(() => estimateAssembly(planar([block(15, { model: "layers", layerDensity_per_cm: 10, spacer })]))).toThrow(/layup\[0\]\.spacer\.layerDensityExponent/);
+  });
+
   it("boil-off of each sink is boilOff of its net heat", () => {
     const design = planar([block(20), { ...nitrogenStage, temperature_K: 77.355, cryogen: "nitrogen", capacity_L: 60 }, block(10)], {
       cold: { temperature_K: 4.222, emissivity: 0.05, cryogen: "helium-4", capacity_L: 250, fillFraction: 0.9, minimumFraction: 0.1 },

@@ -85,6 +85,35 @@ describe("estimateLayers: with spacer conduction", () => {
     result.layerTemperatures_K.forEach((t, k) => expect(Math.abs(t - (300 - (223 * (k + 1)) / 11))).toBeLessThan(1e-2));
   });
 
+  it("with a conductance proportional to the mean temperature, makes T² fall linearly (k ∝ T integrated)", () => {
+    // h(T_m) = h_ref·T_m/T_ref gives each gap q = (h_ref/2T_ref)·(T_i² − T_{i+1}²): equal heats
+    // make T² linear in the gap index, q = (h_ref/2T_ref)·(T_w² − T_c²)/(N + 1), as the thermal-
+    // conductivity integral for k ∝ T gives (common practice).
+    const input = blanket(10, {
+      warm: { temperature_K: 300, emissivity: 1e-6 },
+      cold: { temperature_K: 20, emissivity: 1e-6 },
+      reflector: { warmSide: 1e-6, coldSide: 1e-6 },
+      spacer: { conductance_W_per_m2_K: 0.0364, referenceTemperature_K: 188.5 },
+    });
+    const result = estimateLayers(input);
+    const p = 0.0364 / 188.5;
+    const span = 300 ** 2 - 20 ** 2;
+    expect(relative(result.heatFlux_W_per_m2, (p / 2) * (span / 11))).toBeLessThan(1e-4);
+    result.layerTemperatures_K.forEach((t, k) => expect(relative(t, Math.sqrt(300 ** 2 - (span * (k + 1)) / 11))).toBeLessThan(1e-4));
+    // The same conductance held fixed carries more: the cold gaps conduct as if they were warm.
+    const fixed = estimateLayers({ ...input, spacer: { conductance_W_per_m2_K: 0.0364 } });
+    expect(fixed.heatFlux_W_per_m2).toBeGreaterThan(result.heatFlux_W_per_m2);
+  });
+
+  it("carries the same heat through every gap with a temperature-proportional spacer and real films", () => {
+    const spacer = { conductance_W_per_m2_K: 0.05, referenceTemperature_K: 150 };
+    const input = blanket(30, { spacer });
+    const result = estimateLayers(input);
+    const t = [300, ...result.layerTemperatures_K, 4.2];
+    const fluxes = gapFluxes(input, result.layerTemperatures_K).map((radiation, g) => radiation + (0.05 / 150) * ((t[g] + t[g + 1]) / 2) * (t[g] - t[g + 1]));
+    for (const q of fluxes) expect(relative(q, result.heatFlux_W_per_m2)).toBeLessThan(1e-9);
+  });
+
   it("treats conductivity over thickness times the contact factor as the conductance", () => {
     // 0.02 W/(m·K) over 0.1 mm with 1 % surviving the point contacts: 2 W/(m²·K).
     const modelled = estimateLayers(blanket(8, { spacer: { conductivity_W_per_m_K: 0.02, thickness_m: 1e-4, contactFactor: 0.01 } }));

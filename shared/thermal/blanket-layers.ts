@@ -4,9 +4,14 @@ import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA, ThermalInputError, requireAbove,
 import { GASES, GasName, accommodationAt, freeMolecularParameter, requireAccommodation, requireGas } from "./gas-conduction";
 import { MAX_SHIELDS } from "./radiation-network";
 
-/** Solid conduction through the spacer between two neighbours, per unit area. */
+/**
+ * Solid conduction through the spacer between two neighbours, per unit area. A conductance with
+ * a reference temperature scales in proportion to the gap's mean temperature, h = h_ref·T_m/T_ref,
+ * the form of the solid term of Cunnington, Keller & Glassford (NASA CR-134477, 1974),
+ * h_s = C_s·N̄^a·T_m; without one it is the same at every temperature.
+ */
 export type SpacerModel =
-  | { conductance_W_per_m2_K: number }
+  | { conductance_W_per_m2_K: number; referenceTemperature_K?: number }
   /** Bulk k/t scaled by the fraction that survives the point contacts (default 1: bulk, an upper bound). */
   | { conductivity_W_per_m_K: number; thickness_m: number; contactFactor?: number };
 
@@ -119,22 +124,37 @@ function validateLayers(input: BlanketLayersInput) {
     warmModel: input.warm.emissivity,
     coldModel: input.cold.emissivity,
     reflector: input.reflector,
-    spacer_W_per_m2_K: spacerConductance(input.spacer),
+    spacer: spacerConductance(input.spacer),
     gas: gasParameters(input.gas),
   };
 }
 
-function spacerConductance(spacer: SpacerModel | undefined): number {
-  if (spacer === undefined) return 0;
+/** The gap's spacer conductance as h(T_m) = constant + perKelvin·T_m, in W/(m²·K). */
+type SpacerConductance = { constant: number; perKelvin: number };
+
+function spacerConductance(spacer: SpacerModel | undefined): SpacerConductance {
+  if (spacer === undefined) return { constant: 0, perKelvin: 0 };
   if (spacer === null || typeof spacer !== "object") throw new ThermalInputError("spacer", spacer, "a spacer conductance or conductivity model");
-  if ("conductance_W_per_m2_K" in spacer) return requireAbove("spacer.conductance_W_per_m2_K", spacer.conductance_W_per_m2_K, 0, "W/(m²·K)");
+  if ("conductance_W_per_m2_K" in spacer) {
+    const h = requireAbove("spacer.conductance_W_per_m2_K", spacer.conductance_W_per_m2_K, 0, "W/(m²·K)");
+    if (spacer.referenceTemperature_K === undefined) return { constant: h, perKelvin: 0 };
+    return { constant: 0, perKelvin: h / requireAbove("spacer.referenceTemperature_K", spacer.referenceTemperature_K, 0, "K") };
+  }
   const k = requireAbove("spacer.conductivity_W_per_m_K", spacer.conductivity_W_per_m_K, 0, "W/(m·K)");
   const thickness_m = requireAbove("spacer.thickness_m", spacer.thickness_m, 0, "m");
   const contact = spacer.contactFactor ?? 1;
   if (typeof contact !== "number" || !(contact > 0 && contact <= 1)) {
     throw new ThermalInputError("spacer.contactFactor", contact, "a fraction above 0 and at most 1");
   }
-  return (contact * k) / thickness_m;
+  return { constant: (contact * k) / thickness_m, perKelvin: 0 };
+}
+
+/**
+ * The spacer's heat across a gap from a to b and its derivatives: (c + p·(a + b)/2)·(a − b),
+ * so ∂/∂a = c + p·a and ∂/∂b = −(c + p·b).
+ */
+function spacerTerm(s: SpacerConductance, a: number, b: number, drop: number) {
+  return { heat: (s.constant + (s.perKelvin * (a + b)) / 2) * drop, dWarm: s.constant + s.perKelvin * a, dCold: -(s.constant + s.perKelvin * b) };
 }
 
 function gasParameters(gas: BlanketGas | undefined) {
@@ -172,9 +192,10 @@ function gapModel(v: Validated) {
       // dR/dT = −ε′/ε²; the wall faces sit at fixed temperatures, so only shields move.
       const dRu = g === 0 ? 0 : -emissivitySlope(upper, a, eu) / (eu * eu);
       const dRl = g === n ? 0 : -emissivitySlope(lower, b, el) / (el * el);
-      let dWarm = (4 * SIGMA * a * a * a - rad * dRu) / r + v.spacer_W_per_m2_K;
-      let dCold = (-4 * SIGMA * b * b * b - rad * dRl) / r - v.spacer_W_per_m2_K;
-      let heat = rad + v.spacer_W_per_m2_K * drop;
+      const solid = spacerTerm(v.spacer, a, b, drop);
+      let dWarm = (4 * SIGMA * a * a * a - rad * dRu) / r + solid.dWarm;
+      let dCold = (-4 * SIGMA * b * b * b - rad * dRl) / r + solid.dCold;
+      let heat = rad + solid.heat;
       if (v.gas !== undefined && v.gas.perAccommodation > 0) {
         const gas = gasTerm(v.gas, a, b, drop);
         heat += gas.heat;
@@ -240,5 +261,5 @@ function gapParts(v: Validated, ua: number, ub: number, upper: Emissivity, lower
   const el = evaluateEmissivity(lower, b);
   const radiation = (SIGMA * drop * (a + b) * (a * a + b * b)) / (1 / eu + 1 / el - 1);
   const gas = v.gas !== undefined && v.gas.perAccommodation > 0 ? gasTerm(v.gas, a, b, drop).heat : 0;
-  return { radiation, solid: v.spacer_W_per_m2_K * drop, gas };
+  return { radiation, solid: spacerTerm(v.spacer, a, b, drop).heat, gas };
 }

@@ -178,7 +178,15 @@ const METRES_PER_CM = 0.01;
 function spacerModel(block: PlanBlock): SpacerModel | undefined {
   const s = block.spacer;
   if (s === undefined) return undefined;
-  if ("conductance_W_per_m2_K" in s) return { conductance_W_per_m2_K: s.conductance_W_per_m2_K };
+  if ("conductance_W_per_m2_K" in s) {
+    // Contacts press harder in a denser blanket: the conductance follows (N̄/N̄_ref)^a when both are known.
+    const density = block.layerDensity_per_cm;
+    const scaled =
+      s.referenceLayerDensity_per_cm !== undefined && s.layerDensityExponent !== undefined && density !== undefined
+        ? s.conductance_W_per_m2_K * (density / s.referenceLayerDensity_per_cm) ** s.layerDensityExponent
+        : s.conductance_W_per_m2_K;
+    return { conductance_W_per_m2_K: scaled, referenceTemperature_K: s.referenceMeanTemperature_K };
+  }
   const thickness_m = s.thickness_m ?? METRES_PER_CM / (block.layerDensity_per_cm as number);
   return { conductivity_W_per_m_K: s.conductivity_W_per_m_K, thickness_m, contactFactor: s.contactFactor };
 }

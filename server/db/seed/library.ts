@@ -77,7 +77,8 @@ const wallFinishes: SeedEntry[] = [
 ];
 
 // The 1974 correlation's solid term per gap is h = C_s·N̄^a·T_m (q_s = h·ΔT/(N + 1)). We evaluate
-// it at 20 layers/cm (our choice, a typical blanket) and T_m of a 77–300 K blanket.
+// it at 20 layers/cm (our choice, a typical blanket) and T_m of a 77–300 K blanket, and keep both
+// reference conditions so the layer-by-layer model scales it to each block and gap.
 const SPACER_LAYER_DENSITY_PER_CM = 20;
 const SPACER_RANGE = { min: 77, max: 300 };
 function spacerFromCorrelation(id: string, name: string, setId: string): SeedEntry {
@@ -85,16 +86,22 @@ function spacerFromCorrelation(id: string, name: string, setId: string): SeedEnt
   if (!set) throw new Error(`seed: the engine has no correlation set ${setId}`);
   const meanTemperature_K = (SPACER_RANGE.min + SPACER_RANGE.max) / 2;
   const conductance_W_per_m2_K = set.coefficients.solid * SPACER_LAYER_DENSITY_PER_CM ** set.coefficients.solidExponent * meanTemperature_K;
+  const solidConduction = {
+    conductance_W_per_m2_K: Number(conductance_W_per_m2_K.toPrecision(3)),
+    referenceMeanTemperature_K: meanTemperature_K,
+    referenceLayerDensity_per_cm: SPACER_LAYER_DENSITY_PER_CM,
+    layerDensityExponent: set.coefficients.solidExponent,
+  };
   return {
     id,
-    input: entry(name, { kind: "spacer", form: "netting", solidConduction: { conductance_W_per_m2_K: Number(conductance_W_per_m2_K.toPrecision(3)) } }, SPACER_RANGE, {
+    input: entry(name, { kind: "spacer", form: "netting", solidConduction }, SPACER_RANGE, {
       type: "citation",
       author: "G. R. Cunnington, C. W. Keller & C. L. Glassford",
       title: "Thermal Performance of Multilayer Insulations, NASA CR-134477",
       year: 1974,
       location: `solid-conduction term of the ${set.label} fit`,
       fromMemory: true,
-      note: `derived: C_s·N̄^a·T_m with the engine's set ${set.id} at ${SPACER_LAYER_DENSITY_PER_CM} layers/cm and T_m = ${meanTemperature_K} K; ${set.provenance}`,
+      note: `derived: C_s·N̄^a·T_m with the engine's set ${set.id} at ${SPACER_LAYER_DENSITY_PER_CM} layers/cm and T_m = ${meanTemperature_K} K, scaled as N̄^${set.coefficients.solidExponent}·T_m elsewhere; ${set.provenance}`,
     }),
   };
 }

@@ -7,7 +7,8 @@ import { isApiError } from "../../../lib/api-client";
 import { useEstimate } from "../api/estimate-design";
 import type { ResultsState } from "../components/results/results-panel";
 
-const DEBOUNCE_MS = 150;
+// Long enough to merge the keystrokes of one number, short enough to leave the repaint budget (150 ms) to the estimate.
+const DEBOUNCE_MS = 50;
 const MAX_PROBLEMS = 6;
 
 type Saved = { contentKey: string | null; prediction: Prediction };

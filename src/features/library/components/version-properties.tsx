@@ -24,8 +24,8 @@ function propertyItems(p: MaterialProperties): Item[] {
       const s = p.solidConduction;
       const conduction = !s
         ? "not given"
-        : s.conductance_W_per_m2_K !== undefined
-          ? `${formatNumber(s.conductance_W_per_m2_K)} W/(m²·K) per gap`
+        : "conductance_W_per_m2_K" in s
+          ? `${formatNumber(s.conductance_W_per_m2_K)} W/(m²·K) per gap${s.referenceMeanTemperature_K !== undefined ? ` at a mean ${formatNumber(s.referenceMeanTemperature_K)} K (scales with T)` : ""}${s.referenceLayerDensity_per_cm !== undefined ? ` and ${formatNumber(s.referenceLayerDensity_per_cm)} layers/cm (scales as density^${formatNumber(s.layerDensityExponent ?? 0)})` : ""}`
           : `${formatNumber(s.conductivity_W_per_m_K)} W/(m·K) over ${formatNumber(s.thickness_m)} m${s.contactFactor !== undefined ? `, contact factor ${formatNumber(s.contactFactor)}` : ""}`;
       return [["Form", p.form[0].toUpperCase() + p.form.slice(1)], ["Solid conduction", conduction]];
     }

@@ -30,7 +30,16 @@ export type MaterialFormValues = {
     warmSide: SpecForm;
     coldSide: SpecForm;
     surface: SpecForm;
-    solidConduction: { mode: "none" | "conductance" | "conductivity"; conductance_W_per_m2_K: string; conductivity_W_per_m_K: string; thickness_m: string; contactFactor: string };
+    solidConduction: {
+      mode: "none" | "conductance" | "conductivity";
+      conductance_W_per_m2_K: string;
+      referenceMeanTemperature_K: string;
+      referenceLayerDensity_per_cm: string;
+      layerDensityExponent: string;
+      conductivity_W_per_m_K: string;
+      thickness_m: string;
+      contactFactor: string;
+    };
     supportMaterial: SupportMaterial;
     basedOn: string;
     coefficients: { solid: string; solidExponent: string; radiation: string; gas: string; solidTemperatureTerm: "" | "mean-temperature" | "polyester-conductivity" };
@@ -69,7 +78,7 @@ export function emptyValues(kind: MaterialKind = "reflector"): MaterialFormValue
       warmSide: emptySpec(),
       coldSide: emptySpec(),
       surface: emptySpec(),
-      solidConduction: { mode: "none", conductance_W_per_m2_K: "", conductivity_W_per_m_K: "", thickness_m: "", contactFactor: "" },
+      solidConduction: { mode: "none", conductance_W_per_m2_K: "", referenceMeanTemperature_K: "", referenceLayerDensity_per_cm: "", layerDensityExponent: "", conductivity_W_per_m_K: "", thickness_m: "", contactFactor: "" },
       supportMaterial: "stainless-304",
       basedOn: "",
       coefficients: { solid: "", solidExponent: "", radiation: "", gas: "", solidTemperatureTerm: "" },
@@ -107,7 +116,13 @@ function toProperties(p: MaterialFormValues["properties"]): unknown {
       const s = p.solidConduction;
       const solidConduction =
         s.mode === "none" ? null
-        : s.mode === "conductance" ? { conductance_W_per_m2_K: num(s.conductance_W_per_m2_K) }
+        : s.mode === "conductance"
+          ? {
+              conductance_W_per_m2_K: num(s.conductance_W_per_m2_K),
+              referenceMeanTemperature_K: num(s.referenceMeanTemperature_K),
+              referenceLayerDensity_per_cm: num(s.referenceLayerDensity_per_cm),
+              layerDensityExponent: num(s.layerDensityExponent),
+            }
         : { conductivity_W_per_m_K: num(s.conductivity_W_per_m_K), thickness_m: num(s.thickness_m), contactFactor: num(s.contactFactor) };
       return { kind: p.kind, form: p.form, solidConduction };
     }

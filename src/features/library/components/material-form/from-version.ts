@@ -26,8 +26,19 @@ export function fromVersion(v: MaterialVersion): MaterialFormValues {
   if (p.kind === "spacer") {
     const s = p.solidConduction;
     props.form = p.form;
-    if (s && s.conductance_W_per_m2_K !== undefined) props.solidConduction = { ...props.solidConduction, mode: "conductance", conductance_W_per_m2_K: text(s.conductance_W_per_m2_K) };
-    else if (s) props.solidConduction = { mode: "conductivity", conductance_W_per_m2_K: "", conductivity_W_per_m_K: text(s.conductivity_W_per_m_K), thickness_m: text(s.thickness_m), contactFactor: text(s.contactFactor) };
+    const empty = props.solidConduction;
+    if (s && "conductance_W_per_m2_K" in s) {
+      props.solidConduction = {
+        ...empty,
+        mode: "conductance",
+        conductance_W_per_m2_K: text(s.conductance_W_per_m2_K),
+        referenceMeanTemperature_K: text(s.referenceMeanTemperature_K),
+        referenceLayerDensity_per_cm: text(s.referenceLayerDensity_per_cm),
+        layerDensityExponent: text(s.layerDensityExponent),
+      };
+    } else if (s) {
+      props.solidConduction = { ...empty, mode: "conductivity", conductivity_W_per_m_K: text(s.conductivity_W_per_m_K), thickness_m: text(s.thickness_m), contactFactor: text(s.contactFactor) };
+    }
   }
   if (p.kind === "support-material") props.supportMaterial = p.supportMaterial;
   if (p.kind === "correlation-set") {

@@ -25,7 +25,18 @@ export function SpacerFields() {
           <option value="conductivity">A conductivity with thickness</option>
         </SelectField>
         {mode === "conductance" ? (
-          <TextField label="Conductance per gap, W/(m²·K) (above 0, at most 1000)" inputMode="decimal" error={at("conductance_W_per_m2_K")} {...register("properties.solidConduction.conductance_W_per_m2_K")} />
+          <div className="space-y-3">
+            <TextField label="Conductance per gap, W/(m²·K) (above 0, at most 1000)" inputMode="decimal" error={at("conductance_W_per_m2_K")} {...register("properties.solidConduction.conductance_W_per_m2_K")} />
+            <p className="text-xs text-ink-300">
+              Where it was measured, if known: the layer-by-layer model then scales it with each gap's mean temperature and with the block's
+              layer density as (N̄/N̄ref)^a. Left empty, the conductance is used as it is everywhere.
+            </p>
+            <div className="grid gap-3 sm:grid-cols-3">
+              <TextField label="At mean temperature, K (optional)" hint="Above 0, at most 400" inputMode="decimal" error={at("referenceMeanTemperature_K")} {...register("properties.solidConduction.referenceMeanTemperature_K")} />
+              <TextField label="At layer density, layers/cm (optional)" hint="Above 0, at most 100" inputMode="decimal" error={at("referenceLayerDensity_per_cm")} {...register("properties.solidConduction.referenceLayerDensity_per_cm")} />
+              <TextField label="Density exponent a (optional)" hint="0 to 5; with the layer density" inputMode="decimal" error={at("layerDensityExponent")} {...register("properties.solidConduction.layerDensityExponent")} />
+            </div>
+          </div>
         ) : null}
         {mode === "conductivity" ? (
           <div className="grid gap-3 sm:grid-cols-3">

@@ -1,0 +1,28 @@
+#!/usr/bin/env bash
+# npm run bench: every benchmark, each printing its figures. None of them fails on a figure;
+# a benchmark fails only when it cannot run (a refused request, a missing demo design).
+# Each uses its own ports and data folders, so it can run beside `npm start` and `npm test`.
+set -uo pipefail
+cd "$(dirname "$0")/.."
+bash scripts/ensure-deps.sh --with-browser || exit 1
+export PATH="$PATH:/usr/sbin:/sbin"
+
+failed=()
+step() {
+  local name="$1"; shift
+  echo ""
+  echo "=== $name ==="
+  if "$@"; then :; else echo "=== $name: could not run ==="; failed+=("$name"); fi
+}
+
+step "engine (vitest bench)" npx vitest bench --run --project shared
+step "POST /api/estimate load (autocannon)" npx tsx tests/bench/estimate-load.ts
+step "client build" npx vite build --logLevel warn
+step "browser: edit-to-repaint and sign-in JavaScript" npx playwright test -c playwright.bench.config.ts
+
+echo ""
+if [ ${#failed[@]} -gt 0 ]; then
+  echo "npm run bench: could not run: ${failed[*]}"
+  exit 1
+fi
+echo "npm run bench: done"

@@ -1,0 +1,157 @@
+/**
+ * The 1,000,000-row weighing log benchmark (issue #7), printed and never asserted:
+ * `npm run bench` runs it after the engine bench; alone: `npx tsx tests/bench/boil-off-upload.ts`.
+ *
+ * It starts the real local stack (its own MariaDB in .data/bench-mariadb, the S3 fake, the SMTP
+ * fake, migrations and the demo seed), generates an invented log (a steady mass loss plus
+ * seeded noise, ISO timestamps a second apart and a barometer column), and sends it over real
+ * HTTP to POST /api/boil-off-tests/:id/logs as a browser would: upload → parse → store (file and
+ * series in the S3 fake, rows in MariaDB) → fit. Then it reads raw csv-parse speed on the same
+ * file, the server's own parse alone, and the time of GET /series (the chart request).
+ *
+ * BENCH_ROWS (1,000,000), BENCH_DB_PORT (3339) and BENCH_PORT (3110) move it.
+ */
+import { createReadStream, createWriteStream, openAsBlob } from "node:fs";
+import { mkdtemp, rm, stat } from "node:fs/promises";
+import { once } from "node:events";
+import os from "node:os";
+import path from "node:path";
+import { parse } from "csv-parse";
+import { Writable } from "node:stream";
+import { pipeline } from "node:stream/promises";
+import { DEMO_PASSWORD, DEMO_USERS } from "../../server/db/seed/demo";
+import { startLocalStack } from "../../server/local/stack";
+import { parseLoggerFile } from "../../server/services/logger-files";
+
+const ROWS = Number(process.env.BENCH_ROWS ?? 1_000_000);
+const PORT = Number(process.env.BENCH_PORT ?? 3110);
+const DB_PORT = Number(process.env.BENCH_DB_PORT ?? 3339);
+
+const fmt = (x: number) => Math.round(x).toLocaleString("en-US");
+const seconds = (ms: number) => `${(ms / 1000).toFixed(2)} s`;
+
+/** mulberry32 + Box–Muller, so every run sends the same file. */
+function gaussian(seed: number) {
+  let a = seed >>> 0;
+  const uniform = () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = Math.imul(a ^ (a >>> 15), 1 | a);
+    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+  return () => Math.sqrt(-2 * Math.log(uniform() || 1e-12)) * Math.cos(2 * Math.PI * uniform());
+}
+
+/** Invented: 160 kg falling by 30 g/h, 2 g scale noise, one reading a second for about 11.6 days. */
+async function writeLog(file: string, rows: number) {
+  const out = createWriteStream(file);
+  const noise = gaussian(42);
+  const start = Date.parse("2026-11-02T08:00:00Z");
+  let chunk = "timestamp,gross mass (kg),barometer (hPa)\n";
+  for (let i = 0; i < rows; i++) {
+    const mass = 160 - (0.03 / 3600) * i + 0.002 * noise();
+    const pressure = 1013 + 4 * Math.sin((2 * Math.PI * i) / 86_400);
+    chunk += `${new Date(start + i * 1000).toISOString()},${mass.toFixed(4)},${pressure.toFixed(1)}\n`;
+    if (chunk.length > 1 << 20) {
+      if (!out.write(chunk)) await once(out, "drain");
+      chunk = "";
+    }
+  }
+  out.end(chunk);
+  await once(out, "finish");
+}
+
+async function rawCsvParse(file: string) {
+  let records = 0;
+  const started = performance.now();
+  await pipeline(
+    createReadStream(file, { highWaterMark: 1 << 20 }),
+    parse({ on_record: () => { records++; return null; } }),
+    new Writable({ objectMode: true, write: (_r, _e, cb) => cb() }),
+  );
+  return { records: records - 1, ms: performance.now() - started };
+}
+
+async function main() {
+  const dir = await mkdtemp(path.join(os.tmpdir(), "frostfold-bench-"));
+  const file = path.join(dir, "weighing-1m.csv");
+  console.log(`\nboil-off upload benchmark: ${fmt(ROWS)}-row weighing log (printed, never asserted)`);
+  console.log(`machine: ${os.cpus().length} × ${os.cpus()[0]?.model ?? "cpu"}, load average ${os.loadavg().map((l) => l.toFixed(2)).join(" ")}, node ${process.version}`);
+  let t0 = performance.now();
+  await writeLog(file, ROWS);
+  const bytes = (await stat(file)).size;
+  console.log(`generated ${(bytes / 1e6).toFixed(1)} MB in ${seconds(performance.now() - t0)}`);
+
+  const stack = await startLocalStack({
+    dataDir: ".data/bench-mariadb",
+    port: PORT,
+    dbPort: DB_PORT,
+    smtpPort: 0,
+    database: "frostfold_bench",
+    freshDatabase: true,
+    logLevel: "warn",
+    log: () => {},
+  });
+  try {
+    const origin = stack.origin;
+    const user = DEMO_USERS.find((u) => u.role === "technician")!;
+    const signIn = await fetch(`${origin}/api/auth/sign-in`, { method: "POST", headers: { "content-type": "application/json", origin }, body: JSON.stringify({ email: user.email, password: DEMO_PASSWORD }) });
+    const cookie = (signIn.headers.get("set-cookie") ?? "").split(";")[0];
+    const headers = { cookie, origin };
+    const designs = (await (await fetch(`${origin}/api/designs`, { headers })).json()) as { designs: { id: string; name: string; latestRevision: number }[] };
+    const dewar = designs.designs.find((d) => d.name.includes("nitrogen storage dewar"))!;
+    const created = await fetch(`${origin}/api/boil-off-tests`, {
+      method: "POST",
+      headers: { ...headers, "content-type": "application/json" },
+      body: JSON.stringify({ designId: dewar.id, revision: dewar.latestRevision, method: "weighing", vesselLabel: "Benchmark dewar" }),
+    });
+    const test = (await created.json()) as { id: string };
+
+    // The file goes up as a browser's FormData would send it, read from disk as it is sent.
+    const form = new FormData();
+    form.append("timeColumn", "timestamp");
+    form.append("valueColumn", "gross mass (kg)");
+    form.append("valueUnit", "kg");
+    form.append("pressureColumn", "barometer (hPa)");
+    form.append("file", await openAsBlob(file, { type: "text/csv" }), "weighing-1m.csv");
+    t0 = performance.now();
+    const upload = await fetch(`${origin}/api/boil-off-tests/${test.id}/logs`, { method: "POST", headers, body: form });
+    const body = (await upload.json()) as { log?: { rows: number }; analysis?: { points: number; window: { start_s: number; end_s: number }; ratio: number }; error?: unknown };
+    const endToEnd = performance.now() - t0;
+    if (upload.status !== 201) throw new Error(`upload answered ${upload.status}: ${JSON.stringify(body)}`);
+
+    // The chart request: first call, then the median of ten.
+    const series = async () => {
+      const s = performance.now();
+      const res = await fetch(`${origin}/api/boil-off-tests/${test.id}/series`, { headers });
+      const json = (await res.json()) as { points: unknown[] };
+      if (res.status !== 200) throw new Error(`series answered ${res.status}`);
+      return { ms: performance.now() - s, points: json.points.length };
+    };
+    const first = await series();
+    const runs: number[] = [];
+    for (let i = 0; i < 10; i++) runs.push((await series()).ms);
+    runs.sort((a, b) => a - b);
+
+    const raw = await rawCsvParse(file);
+    t0 = performance.now();
+    const parsed = await parseLoggerFile({ path: file, originalName: "weighing-1m.csv", size: bytes }, { timeColumn: "timestamp", valueColumn: "gross mass (kg)", pressureColumn: "barometer (hPa)", valueFactor: 1 });
+    const serverParse = performance.now() - t0;
+
+    const rows = body.log!.rows;
+    console.log("");
+    console.log(`| measure | figure |`);
+    console.log(`| --- | --- |`);
+    console.log(`| end to end: POST /logs over HTTP (upload, parse, S3 put of file and series, MariaDB, fit, chart) | ${seconds(endToEnd)}, ${fmt(rows / (endToEnd / 1000))} rows/s (${((bytes / 1e6) / (endToEnd / 1000)).toFixed(1)} MB/s) |`);
+    console.log(`| raw csv-parse on the same file (default options, no conversion) | ${seconds(raw.ms)}, ${fmt(raw.records / (raw.ms / 1000))} rows/s |`);
+    console.log(`| the server's parse alone (csv-parse + checks + SHA-256 + Float64 columns) | ${seconds(serverParse)}, ${fmt(parsed.rows / (serverParse / 1000))} rows/s |`);
+    console.log(`| GET /series (chart, ${first.points} points) | first ${first.ms.toFixed(1)} ms, median of 10 ${runs[5].toFixed(1)} ms, slowest ${runs[9].toFixed(1)} ms |`);
+    console.log(`\nfit: ${fmt(body.analysis!.points)} readings in the suggested window ${fmt(body.analysis!.window.start_s)}–${fmt(body.analysis!.window.end_s)} s, ratio ${body.analysis!.ratio.toFixed(3)}`);
+  } finally {
+    await stack.stop();
+    await rm(dir, { recursive: true, force: true });
+  }
+}
+
+await main();
+process.exit(0);
