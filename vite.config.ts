@@ -17,7 +17,7 @@ export default defineConfig({
       {
         test: {
           name: "shared",
-          include: ["shared/**/*.test.ts"],
+          include: ["shared/**/*.test.ts", "src/**/*.test.ts"],
           benchmark: { include: ["tests/bench/**/*.bench.ts"] },
           environment: "node",
           setupFiles: ["tests/support/fail-on-console-error.ts"],

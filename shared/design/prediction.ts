@@ -16,7 +16,7 @@ export interface Prediction {
 }
 
 export interface LayerSweep {
-  /** The layup index of the swept block (the one with the most layers). */
+  /** The layup index of the swept block (the one with the most layers after the last stage). */
   layupIndex: number;
   points: { layers: number; coldHeat_W: number }[];
   targetColdHeat_W: number | null;
