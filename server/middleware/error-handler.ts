@@ -12,7 +12,9 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
     return send(error.status, { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}) });
   }
   if (error instanceof ThermalInputError) {
-    return send(400, { code: "invalid_input", message: error.message, fields: [{ path: error.field, message: error.message }] });
+    // The engine names fields as layup[2].temperature_K; forms and zod use layup.2.temperature_K.
+    const path = error.field.replace(/\[(\d+)\]/g, ".$1");
+    return send(400, { code: "invalid_input", message: error.message, fields: [{ path, message: error.message }] });
   }
   // body-parser's own errors carry an HTTP status and a type.
   const status = (error as { status?: number }).status;

@@ -158,6 +158,19 @@ describe("duplicate, estimate, compare and report", () => {
     expect(await countRows(t.ctx.db, "designs")).toBe(0);
   });
 
+  it("refuses an estimate the engine cannot make with a 400 whose path is the form's field", async () => {
+    const agent = await t.signInAs("engineer");
+    const content = await panel();
+    const steel = content.warm.finish;
+    // A cooled stage warmer than the warm wall: the engine names layup[1].temperature_K.
+    const stage = { kind: "stage" as const, label: "Too warm", temperature_K: 320, finish: steel };
+    const res = await agent.post("/api/estimate").send({ content: { ...content, layup: [content.layup[0], stage, content.layup[0]] } });
+    expect(res.status).toBe(400);
+    const fields = res.body.error.fields as { path: string; message: string }[];
+    expect(fields.map((f) => f.path)).toEqual(["layup.1.temperature_K"]);
+    expect(fields[0].message).toMatch(/layup\[1\]\.temperature_K/);
+  });
+
   it("compares designs, with yearly cryogen cost at the given price", async () => {
     const { agent, design: a } = await createAs("engineer", "Panel A", 10);
     const { design: b } = await createAs("engineer", "Panel B", 30);
