@@ -53,6 +53,10 @@ export const paths = {
       path: "/library/:id",
       getHref: (id: string, version?: number) => `/library/${encodeURIComponent(id)}${version ? `?version=${version}` : ""}`,
     },
+    tests: { path: "/tests", getHref: () => "/tests" },
+    newTest: { path: "/tests/new", getHref: () => "/tests/new" },
+    // Fixed by the server's alert e-mail (APP_ORIGIN/tests/:id): change only together with it.
+    test: { path: "/tests/:testId", getHref: (testId: string) => `/tests/${encodeURIComponent(testId)}` },
     libraryPropose: { path: "/library/:id/propose", getHref: (id: string) => `/library/${encodeURIComponent(id)}/propose` },
   },
 } as const;

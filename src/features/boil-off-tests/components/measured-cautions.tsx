@@ -1,0 +1,26 @@
+import { WarningIcon } from "../../../components/ui/icons";
+
+// PRODUCT.md's cautions that bear on a measured boil-off: what the figure can and cannot say,
+// and the hazards of the measurement itself (vented gas, cold surfaces, trapped liquid).
+const CAUTIONS = [
+  "Estimates only: a measured heat leak carries the fit's uncertainty and the logger's own errors.",
+  "Loss of vacuum multiplies the heat leak by orders of magnitude: a ratio far above 1 calls for a vacuum check before anything else.",
+  "Vented cryogen displaces oxygen (asphyxiation): log vent flow where the gas is led away or the room is monitored.",
+  "Trapped liquid builds pressure: every closed volume needs relief, including a blocked vent line during a test.",
+  "Cold surfaces burn skin; liquid-nitrogen-cold surfaces condense oxygen-rich liquid from air.",
+  "Local codes, the site's oxygen-deficiency procedure and licensed engineering practice govern.",
+];
+
+export function MeasuredCautions() {
+  return (
+    <section aria-labelledby="measured-cautions" className="rounded-md border border-ember-400/60 bg-ember-900/30 p-4 text-sm text-ember-200">
+      <h3 id="measured-cautions" className="flex items-center gap-2 font-semibold">
+        <WarningIcon className="size-4" />
+        Cautions
+      </h3>
+      <ul className="mt-2 list-disc space-y-1 pl-5">
+        {CAUTIONS.map((c) => <li key={c}>{c}</li>)}
+      </ul>
+    </section>
+  );
+}
