@@ -18,6 +18,7 @@ step() {
 }
 
 step "engine (vitest bench)" npx vitest bench --run --project shared
+step "1,000,000-row log upload" npx tsx tests/bench/boil-off-upload.ts
 step "POST /api/estimate load (autocannon)" npx tsx tests/bench/estimate-load.ts
 step "client build" npx vite build --logLevel warn
 step "browser: edit-to-repaint and sign-in JavaScript" npx playwright test -c playwright.bench.config.ts

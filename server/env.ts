@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { ATTACHMENT_MAX_BYTES, LOG_MAX_BYTES } from "../shared/schemas/boil-off-test";
 
 /**
  * Every setting the server reads, parsed once at start. A bad value stops the process with
@@ -37,6 +38,9 @@ const EnvSchema = z.object({
   S3_ACCESS_KEY_ID: z.string().min(1).default("S3RVER"),
   S3_SECRET_ACCESS_KEY: z.string().min(1).default("S3RVER"),
   S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("true").transform((v) => v === "true"),
+  /** Upload limits in bytes (logger files, attachments); lower them, never raise them past the defaults' order without checking memory. */
+  LOG_MAX_BYTES: z.coerce.number().int().min(1024).default(LOG_MAX_BYTES),
+  ATTACHMENT_MAX_BYTES: z.coerce.number().int().min(1024).default(ATTACHMENT_MAX_BYTES),
 });
 export type Env = z.infer<typeof EnvSchema>;
 

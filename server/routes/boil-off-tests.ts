@@ -3,10 +3,8 @@ import { pipeline } from "node:stream/promises";
 import { Router, type Request, type RequestHandler } from "express";
 import multer from "multer";
 import {
-  ATTACHMENT_MAX_BYTES,
   AttachmentParamsSchema,
   CreateTestInputSchema,
-  LOG_MAX_BYTES,
   LogUploadFieldsSchema,
   PatchTestInputSchema,
   TestListQuerySchema,
@@ -30,7 +28,7 @@ import * as logs from "../services/test-logs";
  */
 function receiveFile(maxBytes: number, what: string): RequestHandler {
   const upload = multer({ storage: multer.diskStorage({}), defParamCharset: "utf8", limits: { fileSize: maxBytes, files: 1, fields: 20, parts: 21 } }).single("file");
-  const mb = maxBytes / (1024 * 1024);
+  const limit = maxBytes >= 1024 * 1024 ? `${Number((maxBytes / (1024 * 1024)).toFixed(1))} MB` : `${Number((maxBytes / 1024).toFixed(1))} KB`;
   return (req, res, next) => {
     res.on("close", () => {
       if (req.file?.path) void rm(req.file.path, { force: true });
@@ -38,7 +36,7 @@ function receiveFile(maxBytes: number, what: string): RequestHandler {
     upload(req, res, (error: unknown) => {
       if (!error) return next();
       if (error instanceof multer.MulterError) {
-        if (error.code === "LIMIT_FILE_SIZE") return next(new AppError(413, "too_large", `The file is larger than the ${mb} MB limit for ${what}. Split it into smaller files.`, [{ path: "file", message: `at most ${mb} MB` }]));
+        if (error.code === "LIMIT_FILE_SIZE") return next(new AppError(413, "too_large", `The file is larger than the ${limit} limit for ${what}. Split it into smaller files.`, [{ path: "file", message: `at most ${limit}` }]));
         if (error.code === "LIMIT_UNEXPECTED_FILE") return next(invalidInput(`Send ${what} as the multipart field "file" (got "${error.field ?? "?"}"), one file per request.`, [{ path: "file", message: "one file in the field file" }]));
         return next(invalidInput(`The upload was refused (${error.message}). Send one file as the multipart field "file".`, [{ path: "file", message: error.message }]));
       }
@@ -54,8 +52,8 @@ function uploaded(req: Request, what: string): UploadedFile {
 
 export function boilOffTestsRouter(ctx: ServiceContext): Router {
   const router = Router();
-  const receiveLog = receiveFile(LOG_MAX_BYTES, "a logger file");
-  const receiveAttachment = receiveFile(ATTACHMENT_MAX_BYTES, "an attachment");
+  const receiveLog = receiveFile(ctx.env.LOG_MAX_BYTES, "a logger file");
+  const receiveAttachment = receiveFile(ctx.env.ATTACHMENT_MAX_BYTES, "an attachment");
 
   router.get("/", requirePermission("read:test"), async (req, res) => {
     res.json({ tests: await tests.listTests(ctx, actorOf(req), parseInput(TestListQuerySchema, req.query, "query")) });
@@ -96,6 +94,11 @@ export function boilOffTestsRouter(ctx: ServiceContext): Router {
   router.put("/:id/window", requirePermission("create:test"), async (req, res) => {
     const { id } = parseInput(TestParamsSchema, req.params, "path");
     res.json(await logs.setWindow(ctx, actorOf(req), id, parseInput(WindowInputSchema, req.body)));
+  });
+
+  router.delete("/:id/window", requirePermission("create:test"), async (req, res) => {
+    const { id } = parseInput(TestParamsSchema, req.params, "path");
+    res.json(await logs.setWindow(ctx, actorOf(req), id, null));
   });
 
   router.get("/:id/analysis", requirePermission("read:test"), async (req, res) => {

@@ -25,13 +25,13 @@ function alertText(p: { designName: string; test: TestRow; analysis: Analysis; t
       `${message}\n\n` +
       `The ratio's 95 % interval is ${a.ratioInterval95!.map((r) => r.toFixed(2)).join(" to ")}. A vessel well over its ` +
       "prediction may have a degraded vacuum, a damaged blanket or a thermal short.\n\n" +
-      `Open the test:\n${p.link}\n\n-- \nFrostfold. You receive this as an owner or engineer of the organization.`,
+      `Open the test:\n${p.link}\n\n-- \nFrostfold. You receive this as an owner of the organization or an engineer of the design.`,
   };
 }
 
 /**
  * Inside the accepting transaction: when the accepted ratio exceeds the organization's
- * threshold, an open alert and one e-mail per owner and engineer go in with it. Returns whether
+ * threshold, an open alert and one e-mail per owner and per engineer of the design go in with it. Returns whether
  * mail was queued, so the caller kicks the outbox after commit.
  */
 export async function raiseAlertIfOver(
@@ -56,7 +56,7 @@ export async function raiseAlertIfOver(
     message: mail.message,
     createdAt: now,
   });
-  const recipients = await repo.listAlertRecipients(tx, actor.organizationId);
+  const recipients = await repo.listAlertRecipients(tx, actor.organizationId, p.test.designId);
   for (const r of recipients) {
     await enqueueEmail(tx, actor.organizationId, { id: newId(), toAddress: r.email, subject: mail.subject, textBody: mail.text, now });
   }

@@ -108,10 +108,70 @@ const ISO = /^(\d{4}-\d{2}-\d{2})[T ](\d{2}:\d{2}(?::\d{2}(?:[.,]\d{1,9})?)?)(Z|
  * is read as UTC, so a logger on local time cannot repeat an hour at a daylight-saving change.
  */
 export function isoCell(cell: string): number {
+  const fast = isoFast(cell);
+  if (fast === fast) return fast; // not NaN
   const m = ISO.exec(cell);
   if (!m) return NaN;
   const zone = m[3] === undefined ? "Z" : m[3].length === 5 ? `${m[3].slice(0, 3)}:${m[3].slice(3)}` : m[3];
   return Date.parse(`${m[1]}T${m[2].replace(",", ".")}${zone}`);
+}
+
+const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+const digit = (s: string, i: number) => {
+  const d = s.charCodeAt(i) - 48;
+  return d >= 0 && d <= 9 ? d : NaN;
+};
+const two = (s: string, i: number) => digit(s, i) * 10 + digit(s, i + 1);
+
+/**
+ * The common logger forms, YYYY-MM-DD[T ]hh:mm:ss[.fff][Z|±hh:mm], read digit by digit (the
+ * regular expression and Date.parse took a tenth of a 1,000,000-row parse). NaN for anything
+ * else, which then goes the general way, so both ways accept exactly the same cells.
+ */
+function isoFast(s: string): number {
+  const n = s.length;
+  if (n < 19 || s.charCodeAt(4) !== 45 || s.charCodeAt(7) !== 45 || s.charCodeAt(13) !== 58 || s.charCodeAt(16) !== 58) return NaN;
+  const sep = s.charCodeAt(10);
+  if (sep !== 84 && sep !== 32) return NaN; // "T" or " "
+  const year = digit(s, 0) * 1000 + digit(s, 1) * 100 + two(s, 2);
+  const month = two(s, 5);
+  const day = two(s, 8);
+  const hour = two(s, 11);
+  const minute = two(s, 14);
+  const second = two(s, 17);
+  // Date.UTC reads years 0–99 as 1900–1999, so those go the general way.
+  if (!(year >= 100 && month >= 1 && month <= 12 && day >= 1 && hour <= 23 && minute <= 59 && second <= 59)) return NaN;
+  const leap = month === 2 && year % 4 === 0 && (year % 100 !== 0 || year % 400 === 0);
+  if (day > DAYS_IN_MONTH[month - 1] + (leap ? 1 : 0)) return NaN;
+  let i = 19;
+  let ms = 0;
+  const mark = s.charCodeAt(i);
+  if (mark === 46 || mark === 44) {
+    // "." or ","; milliseconds from the first three digits, like Date.parse
+    let scale = 100;
+    i++;
+    const from = i;
+    while (i < n && i - from < 9) {
+      const d = digit(s, i);
+      if (d !== d) break;
+      if (scale >= 1) ms += d * scale;
+      scale /= 10;
+      i++;
+    }
+    if (i === from) return NaN;
+  }
+  let offset_min = 0;
+  if (i < n) {
+    const z = s.charCodeAt(i);
+    if (z === 90 && i === n - 1) offset_min = 0; // "Z"
+    else if ((z === 43 || z === 45) && (n - i === 6 || n - i === 5)) {
+      const oh = two(s, i + 1);
+      const om = n - i === 6 ? (s.charCodeAt(i + 3) === 58 ? two(s, i + 4) : NaN) : two(s, i + 3);
+      if (!(oh <= 23 && om <= 59)) return NaN;
+      offset_min = (z === 43 ? 1 : -1) * (oh * 60 + om);
+    } else return NaN;
+  }
+  return Date.UTC(year, month - 1, day, hour, minute, second, ms) - offset_min * 60_000;
 }
 
 export const describeCell = (cell: string) => (cell === "" ? "an empty cell" : `"${cell.slice(0, 40)}"`);

@@ -76,7 +76,7 @@ function valueUnitOf(name: string, method: TestMethod): ValueUnit | null {
   return /%|percent|pct/.test(n) ? "percent" : /\bmm\b/.test(n) ? "mm" : null;
 }
 
-function pressureUnitOf(name: string, cells: string[], d: Delimiter): PressureUnit | null {
+export function pressureUnitOf(name: string, cells: string[], d: Delimiter): PressureUnit | null {
   const n = name.toLowerCase();
   for (const unit of ["hpa", "kpa", "mbar", "torr", "psi", "pa"] as const) {
     if (new RegExp(`\\b${unit}\\b`).test(n)) return ({ hpa: "hPa", kpa: "kPa", mbar: "mbar", torr: "torr", psi: "psi", pa: "Pa" } as const)[unit];

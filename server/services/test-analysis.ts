@@ -1,4 +1,3 @@
-import { createLTTB } from "downsample";
 import { SERIES_MAX_POINTS, SERIES_UNITS, type Analysis, type Series, type TestMethod } from "../../shared/schemas/boil-off-test";
 import {
   boilOff,
@@ -34,6 +33,8 @@ export interface AnalysisContext {
   ventReference: VentReference | null;
   ambientPressure_Pa: number | null;
   firstReadingAt: string | null;
+  /** The log's suggestion when already worked out (it depends on the log only). */
+  suggestedWindow?: { start_s: number; end_s: number };
 }
 
 /**
@@ -74,7 +75,8 @@ function windowBounds(time: Float64Array, w: { start_s: number; end_s: number })
 }
 
 export function analyseSeries(series: StoredSeries, ctx: AnalysisContext, chosen: { start_s: number; end_s: number } | null): { analysis: Analysis; chart: Series } {
-  const window = chosen ?? suggestWindow(series);
+  const suggestedWindow = ctx.suggestedWindow ?? suggestWindow(series);
+  const window = chosen ?? suggestedWindow;
   const [lo, hi] = windowBounds(series.time, window);
   const duration = series.time[series.time.length - 1];
   if (hi - lo < MINIMUM_FIT_POINTS) {
@@ -119,6 +121,7 @@ export function analyseSeries(series: StoredSeries, ctx: AnalysisContext, chosen
   const analysis: Analysis = {
     window,
     suggested: chosen === null,
+    suggestedWindow,
     method: ctx.method,
     cryogen: ctx.cryogen,
     stageIndex: ctx.stageIndex,
@@ -177,13 +180,59 @@ function chartOf(series: StoredSeries, ctx: AnalysisContext, a: Analysis, lo: nu
   };
 }
 
-/** LTTB (Steinarsson 2013, the downsample package) over reading indices, so no copy of the series is made. */
-function downsample(x: Float64Array, y: Float64Array): [number, number][] {
-  const indices = new Uint32Array(x.length);
-  for (let i = 0; i < indices.length; i++) indices[i] = i;
-  const lttb = createLTTB<number>({ x: (i: number) => x[i], y: (i: number) => y[i] });
-  const picked = lttb(indices, SERIES_MAX_POINTS);
-  const out: [number, number][] = new Array(picked.length);
-  for (let k = 0; k < picked.length; k++) out[k] = [x[picked[k]], y[picked[k]]];
+/**
+ * Largest-Triangle-Three-Buckets (Steinarsson, "Downsampling Time Series for Visual
+ * Representation", MSc thesis, University of Iceland, 2013): keeps the first and last points and,
+ * from each of the threshold − 2 equal buckets between them, the point that makes the largest
+ * triangle with the point kept before it and the mean of the next bucket. Written out over the
+ * Float64 columns (the downsample package's accessor form took half a second on 1,000,000
+ * readings); every point it returns is a real reading.
+ */
+export function downsample(x: Float64Array, y: Float64Array, threshold = SERIES_MAX_POINTS): [number, number][] {
+  const n = x.length;
+  if (threshold >= n || threshold < 3) {
+    const all: [number, number][] = new Array(n);
+    for (let i = 0; i < n; i++) all[i] = [x[i], y[i]];
+    return all;
+  }
+  const out: [number, number][] = new Array(threshold);
+  const every = (n - 2) / (threshold - 2);
+  let a = 0;
+  out[0] = [x[0], y[0]];
+  for (let k = 0; k < threshold - 2; k++) {
+    // The mean of the next bucket (the last point for the last bucket).
+    const nextStart = Math.floor((k + 1) * every) + 1;
+    const nextEnd = Math.min(Math.floor((k + 2) * every) + 1, n);
+    let meanX = 0;
+    let meanY = 0;
+    for (let j = nextStart; j < nextEnd; j++) {
+      meanX += x[j];
+      meanY += y[j];
+    }
+    const count = nextEnd - nextStart;
+    if (count > 0) {
+      meanX /= count;
+      meanY /= count;
+    } else {
+      meanX = x[n - 1];
+      meanY = y[n - 1];
+    }
+    const start = Math.floor(k * every) + 1;
+    const end = Math.floor((k + 1) * every) + 1;
+    const ax = x[a];
+    const ay = y[a];
+    let best = start;
+    let bestArea = -1;
+    for (let j = start; j < end; j++) {
+      const area = Math.abs((ax - meanX) * (y[j] - ay) - (ax - x[j]) * (meanY - ay));
+      if (area > bestArea) {
+        bestArea = area;
+        best = j;
+      }
+    }
+    out[k + 1] = [x[best], y[best]];
+    a = best;
+  }
+  out[threshold - 1] = [x[n - 1], y[n - 1]];
   return out;
 }

@@ -69,7 +69,8 @@ export async function addAttachment(ctx: ServiceContext, actor: Actor, testId: s
     await ctx.objects.delete([key]).catch(() => {});
     throw error;
   }
-  return { id, filename, contentType, size_bytes: file.size, sha256, uploadedAt: now.toISOString(), uploadedBy: null };
+  const stored = (await repo.listTestFiles(ctx.db, actor.organizationId, testId, "attachment")).find((f) => f.file.id === id);
+  return { id, filename, contentType, size_bytes: file.size, sha256, uploadedAt: now.toISOString(), uploadedBy: stored?.uploadedBy ?? null };
 }
 
 export async function getAttachment(ctx: ServiceContext, actor: Actor, testId: string, attachmentId: string): Promise<{ filename: string; contentType: string; size: number; sha256: string; body: Readable }> {

@@ -1,6 +1,6 @@
 import { createReadStream } from "node:fs";
 import { createHash } from "node:crypto";
-import { VALUE_UNITS, PRESSURE_UNITS, VALUE_UNIT_IDS, type Analysis, type LogPreview, type LogUploadFields, type Series, type TestDetail, type WindowInput } from "../../shared/schemas/boil-off-test";
+import { VALUE_UNITS, VALUE_UNIT_IDS, type Analysis, type LogPreview, type LogUploadFields, type Series, type TestDetail, type WindowInput } from "../../shared/schemas/boil-off-test";
 import type { CryogenId } from "../../shared/thermal";
 import { insertAuditEntry } from "../db/repositories/audit";
 import * as repo from "../db/repositories/boil-off-tests";
@@ -27,7 +27,7 @@ export async function previewLog(ctx: ServiceContext, actor: Actor, id: string, 
   return previewLoggerFile(file, test.method);
 }
 
-const contextOf = (t: repo.TestRow, firstReadingAt: string | null): AnalysisContext => ({
+const contextOf = (t: repo.TestRow, firstReadingAt: string | null, suggestedWindow?: { start_s: number; end_s: number }): AnalysisContext => ({
   method: t.method,
   cryogen: t.cryogen as CryogenId,
   stageIndex: t.stageIndex,
@@ -38,6 +38,7 @@ const contextOf = (t: repo.TestRow, firstReadingAt: string | null): AnalysisCont
   ventReference: t.ventReference,
   ambientPressure_Pa: t.ambientPressure_Pa,
   firstReadingAt,
+  suggestedWindow,
 });
 
 /** reading × factor = the series unit; a level in mm becomes % of the gauge's full scale. */
@@ -73,7 +74,7 @@ export async function ingestLog(ctx: ServiceContext, actor: Actor, id: string, f
     pressureColumn: fields.pressureColumn,
     timeFormat: fields.timeFormat,
     valueFactor: valueFactor(test, fields),
-    pressureFactor: fields.pressureUnit ? PRESSURE_UNITS[fields.pressureUnit] : undefined,
+    pressureUnit: fields.pressureUnit,
   });
   const series: StoredSeries = { time: parsed.time, value: parsed.value, pressure: parsed.pressure };
   const firstReadingAt = parsed.firstReadingAt?.toISOString() ?? null;
@@ -84,10 +85,17 @@ export async function ingestLog(ctx: ServiceContext, actor: Actor, id: string, f
   const seriesKey = keyOf(actor, id, "series", fileId);
   const encoded = encodeSeries(series);
   const seriesSha256 = createHash("sha256").update(encoded).digest("hex");
-  await ctx.objects.put(logKey, createReadStream(file.path), { contentLength: file.size, contentType: "text/csv", sha256: parsed.sha256 });
-  await ctx.objects.put(seriesKey, encoded, { contentLength: encoded.length, contentType: "application/octet-stream", sha256: seriesSha256 });
+  const puts = await Promise.allSettled([
+    ctx.objects.put(logKey, createReadStream(file.path), { contentLength: file.size, contentType: "text/csv", sha256: parsed.sha256 }),
+    ctx.objects.put(seriesKey, encoded, { contentLength: encoded.length, contentType: "application/octet-stream", sha256: seriesSha256 }),
+  ]);
+  const failed = puts.find((p): p is PromiseRejectedResult => p.status === "rejected");
+  if (failed) {
+    await ctx.objects.delete([logKey, seriesKey]).catch(() => {});
+    throw failed.reason;
+  }
 
-  const log: StoredLog = { ...fields, fileId, rows: parsed.rows, firstReadingAt, duration_s: parsed.time[parsed.rows - 1], seriesKey, seriesSha256, seriesBytes: encoded.length };
+  const log: StoredLog = { ...fields, timeFormat: parsed.timeFormat, pressureUnit: parsed.pressureUnit ?? undefined, fileId, rows: parsed.rows, firstReadingAt, duration_s: parsed.time[parsed.rows - 1], seriesKey, seriesSha256, seriesBytes: encoded.length, suggestedWindow: analysis.suggestedWindow };
   const filename = safeFilename(file.originalName, "log.csv");
   const now = ctx.clock();
   let oldKeys: string[];
@@ -137,20 +145,26 @@ const resultColumns = (analysis: Analysis, chart: Series, suggested: boolean) =>
   ratio: analysis.ratio,
 });
 
-/** The series object is read outside the transaction; the row is then updated only if the log is still the same. */
-export async function setWindow(ctx: ServiceContext, actor: Actor, id: string, window: WindowInput): Promise<Analysis> {
+/**
+ * The series object is read outside the transaction; the row is then updated only if the log is
+ * still the same. A null window goes back to Frostfold's suggestion.
+ */
+export async function setWindow(ctx: ServiceContext, actor: Actor, id: string, window: WindowInput | null): Promise<Analysis> {
   const { test } = await loadTest(ctx.db, actor, id);
   if (test.status === "accepted") throw frozen();
   if (!test.log) throw noLog();
-  const series = decodeSeries(await ctx.objects.getBuffer(test.log.seriesKey));
-  const { analysis, chart } = analyseSeries(series, contextOf(test, test.log.firstReadingAt), window);
+  const stored = await ctx.objects.getBuffer(test.log.seriesKey);
+  // The object store is trusted no further than its checksum.
+  if (createHash("sha256").update(stored).digest("hex") !== test.log.seriesSha256) throw new Error(`the stored series ${test.log.seriesKey} does not match its SHA-256`);
+  const series = decodeSeries(stored);
+  const { analysis, chart } = analyseSeries(series, contextOf(test, test.log.firstReadingAt, test.log.suggestedWindow), window);
   const now = ctx.clock();
   await ctx.db.transaction(async (tx) => {
     const { test: current } = await loadTest(tx, actor, id, true);
     if (current.status === "accepted") throw frozen();
     if (current.log?.fileId !== test.log!.fileId) throw conflict("log_replaced", "A new log was uploaded while the window was being set. Set the window again on the new log.");
-    await repo.updateTest(tx, actor.organizationId, id, { ...resultColumns(analysis, chart, false), updatedAt: now });
-    await insertAuditEntry(tx, actor.organizationId, { actorUserId: actor.userId, action: "test.window", entityType: "boil_off_test", entityId: id, detail: { ...window, ratio: analysis.ratio } }, now);
+    await repo.updateTest(tx, actor.organizationId, id, { ...resultColumns(analysis, chart, window === null), updatedAt: now });
+    await insertAuditEntry(tx, actor.organizationId, { actorUserId: actor.userId, action: "test.window", entityType: "boil_off_test", entityId: id, detail: { ...(window ?? { suggested: true }), ratio: analysis.ratio } }, now);
   });
   return analysis;
 }

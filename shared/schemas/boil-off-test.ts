@@ -103,12 +103,14 @@ export const LogUploadFieldsSchema = z
     timeColumn: columnName("timeColumn"),
     valueColumn: columnName("valueColumn"),
     valueUnit: z.enum(VALUE_UNIT_IDS, { error: `valueUnit must be one of ${VALUE_UNIT_IDS.join(", ")}` }),
-    timeFormat: z.enum(TIME_FORMATS, { error: 'timeFormat must be "iso" (ISO 8601 timestamps) or "seconds" (elapsed seconds)' }),
+    /** Read from the first reading when left out: an ISO 8601 time, else elapsed seconds. */
+    timeFormat: z.preprocess(blankToUndefined, z.enum(TIME_FORMATS, { error: 'timeFormat must be "iso" (ISO 8601 timestamps) or "seconds" (elapsed seconds)' }).optional()),
     pressureColumn: z.preprocess(blankToUndefined, columnName("pressureColumn").optional()),
+    /** With pressureColumn; read from the column's name or the size of its first reading when left out. */
     pressureUnit: z.preprocess(blankToUndefined, z.enum(PRESSURE_UNIT_IDS, { error: `pressureUnit must be one of ${PRESSURE_UNIT_IDS.join(", ")}` }).optional()),
   })
   .superRefine((f, ctx) => {
-    if (f.pressureColumn && !f.pressureUnit) ctx.addIssue({ code: "custom", path: ["pressureUnit"], message: `pressureUnit is required with pressureColumn: one of ${PRESSURE_UNIT_IDS.join(", ")}` });
+    if (f.pressureUnit && !f.pressureColumn) ctx.addIssue({ code: "custom", path: ["pressureColumn"], message: "pressureColumn is required with pressureUnit: the header name of the barometer column" });
     const names = [f.timeColumn, f.valueColumn, f.pressureColumn].filter(Boolean).map((n) => n!.toLowerCase());
     if (new Set(names).size !== names.length) ctx.addIssue({ code: "custom", path: ["valueColumn"], message: "timeColumn, valueColumn and pressureColumn must be different columns" });
   });
@@ -180,6 +182,8 @@ export const AnalysisSchema = z.object({
   window: WindowSchema,
   /** True while the window is Frostfold's suggestion, false once someone set it. */
   suggested: z.boolean(),
+  /** Frostfold's suggested steady window for this log, whatever window is in use (absent on analyses stored before it was kept). */
+  suggestedWindow: WindowSchema.optional(),
   method: methodSchema,
   cryogen: z.enum(CRYOGEN_IDS as [CryogenId, ...CryogenId[]]),
   stageIndex: z.number().int(),

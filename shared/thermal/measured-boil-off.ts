@@ -52,15 +52,15 @@ export function fitRate(
   const start = requireFinite("window.start_s", window.start_s);
   const end = requireAbove("window.end_s", window.end_s, start, "s");
 
-  const indices = selectWindow(series, start, end);
-  const n = indices.length;
+  const [lo, hi] = selectWindow(series, start, end);
+  const n = hi - lo;
   if (n < MINIMUM_FIT_POINTS) {
     throw new ThermalInputError("window", window, `a window holding at least ${MINIMUM_FIT_POINTS} points (it holds ${n})`);
   }
   // Two-pass, centred sums: loggers give large offsets (a 200 kg dewar weighed to 1 g).
   let meanT = 0;
   let meanY = 0;
-  for (const i of indices) {
+  for (let i = lo; i < hi; i++) {
     meanT += series.time[i];
     meanY += series.value[i];
   }
@@ -69,7 +69,7 @@ export function fitRate(
   let sxx = 0;
   let sxy = 0;
   let syy = 0;
-  for (const i of indices) {
+  for (let i = lo; i < hi; i++) {
     const dt = series.time[i] - meanT;
     const dy = series.value[i] - meanY;
     sxx += dt * dt;
@@ -78,7 +78,7 @@ export function fitRate(
   }
   const rate = sxy / sxx;
   let sse = 0;
-  for (const i of indices) {
+  for (let i = lo; i < hi; i++) {
     const e = series.value[i] - meanY - rate * (series.time[i] - meanT);
     sse += e * e;
   }
@@ -221,12 +221,20 @@ export function compareWithPrediction(input: {
   return { ratio: measured / predicted, ratioStdError: stdError / predicted };
 }
 
-function selectWindow(series: Series, start_s: number, end_s: number): number[] {
-  const indices: number[] = [];
-  for (let i = 0; i < series.time.length; i++) {
-    if (series.time[i] >= start_s && series.time[i] <= end_s) indices.push(i);
-  }
-  return indices;
+/** The readings inside [start_s, end_s] as an index range [lo, hi): times increase, so they are contiguous. */
+function selectWindow(series: Series, start_s: number, end_s: number): [number, number] {
+  const t = series.time;
+  const firstAtOrAfter = (x: number, strict: boolean) => {
+    let lo = 0;
+    let hi = t.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (strict ? t[mid] <= x : t[mid] < x) lo = mid + 1;
+      else hi = mid;
+    }
+    return lo;
+  };
+  return [firstAtOrAfter(start_s, false), firstAtOrAfter(end_s, true)];
 }
 
 function requireFinite(field: string, value: unknown): number {

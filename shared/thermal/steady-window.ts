@@ -9,7 +9,10 @@ import { requireAbove, requireWhole, ThermalInputError } from "./errors";
  * standard error of the local slopes, so noise alone never splits a steady run. For candidates
  * spread over the local slopes' distribution, take the longest run of consecutive windows whose
  * slopes stay in the band (ties go to the later run: steady state follows the cool-down), then
- * recentre the band on that run's median slope and take the longest run again.
+ * recentre the band on that run's median slope and take the longest run again. Each local slope
+ * stands for the middle of its w points, so the suggestion runs from the middle of the run's
+ * first window to the middle of its last (to the log's own end where the run reaches it): a
+ * long window's first points would otherwise reach back into a transient.
  */
 export interface SteadyWindowOptions {
   /** Points per local-slope window (default n/20, at least 5). */
@@ -92,8 +95,14 @@ export function suggestSteadyWindow(
   const refined = longestRun(slopes, centre, band(centre));
   if (refined.length >= best.length) best = refined;
 
-  let startIndex = best.start;
-  let endIndex = best.start + best.length - 1 + windowPoints - 1;
+  // A local slope speaks for the middle of its w points, so the steady part runs from the middle
+  // of the run's first window to the middle of its last; a run that reaches either end of the log
+  // takes the log to that end.
+  const half = Math.floor(windowPoints / 2);
+  const lastWindow = slopes.length - 1;
+  const runEnd = best.start + best.length - 1;
+  let startIndex = best.start === 0 ? 0 : best.start + half;
+  let endIndex = runEnd === lastWindow ? n - 1 : runEnd + half;
   while (endIndex - startIndex + 1 < minimumPoints) {
     if (endIndex < n - 1) endIndex++;
     if (endIndex - startIndex + 1 < minimumPoints && startIndex > 0) startIndex--;

@@ -1,6 +1,6 @@
-import { and, desc, eq, inArray, isNull } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, isNotNull, isNull } from "drizzle-orm";
 import type { Tx } from "../client";
-import { alerts, boilOffTests, designs, memberships, users } from "../schema";
+import { alerts, boilOffTests, designRevisions, designs, memberships, users } from "../schema";
 
 type NewAlert = Omit<typeof alerts.$inferInsert, "organizationId">;
 
@@ -51,11 +51,27 @@ export async function acknowledgeAlert(db: Tx, organizationId: string, id: strin
   return result.affectedRows > 0;
 }
 
-/** Who is told about an alert: the organization's owners and engineers. */
-export async function listAlertRecipients(db: Tx, organizationId: string) {
-  return db
-    .select({ email: users.email, name: users.name })
+/**
+ * Who is told about an alert: the organization's owners, and the design's engineers: members
+ * who are engineers now and created the design or saved one of its revisions.
+ */
+export async function listAlertRecipients(db: Tx, organizationId: string, designId: string) {
+  const authors = db
+    .select({ userId: designRevisions.createdByUserId })
+    .from(designRevisions)
+    .where(and(eq(designRevisions.organizationId, organizationId), eq(designRevisions.designId, designId), isNotNull(designRevisions.createdByUserId)))
+    .union(
+      db
+        .select({ userId: designs.createdByUserId })
+        .from(designs)
+        .where(and(eq(designs.organizationId, organizationId), eq(designs.id, designId), isNotNull(designs.createdByUserId))),
+    );
+  const authorIds = new Set((await authors).map((a) => a.userId));
+  const members = await db
+    .select({ userId: users.id, email: users.email, name: users.name, role: memberships.role })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
-    .where(and(eq(memberships.organizationId, organizationId), inArray(memberships.role, ["owner", "engineer"])));
+    .where(and(eq(memberships.organizationId, organizationId), inArray(memberships.role, ["owner", "engineer"])))
+    .orderBy(asc(users.email));
+  return members.filter((m) => m.role === "owner" || authorIds.has(m.userId)).map(({ email, name, role }) => ({ email, name, role }));
 }

@@ -1,5 +1,5 @@
 import { bigint, boolean, char, datetime, double, index, int, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
-import type { Analysis, LogUploadFields, Series } from "../../../shared/schemas/boil-off-test";
+import type { Analysis, LogUploadFields, Series, TimeFormat } from "../../../shared/schemas/boil-off-test";
 import { TEST_METHODS, TEST_STATUSES, VENT_REFERENCES } from "../../../shared/schemas/boil-off-test";
 import { designs } from "./designs";
 import { jsonText } from "./json-text";
@@ -7,7 +7,9 @@ import { organizations } from "./organizations";
 import { users } from "./users";
 
 /** What the test row remembers of its current log: the mapping used and the parsed series object. */
-export interface StoredLog extends LogUploadFields {
+export interface StoredLog extends Omit<LogUploadFields, "timeFormat"> {
+  /** As sent, or as read from the file's first reading. */
+  timeFormat: TimeFormat;
   fileId: string;
   rows: number;
   firstReadingAt: string | null;
@@ -15,6 +17,8 @@ export interface StoredLog extends LogUploadFields {
   seriesKey: string;
   seriesSha256: string;
   seriesBytes: number;
+  /** Frostfold's suggested window for this log (absent on rows written before it was kept). */
+  suggestedWindow?: { start_s: number; end_s: number };
 }
 
 /**
