@@ -17,7 +17,7 @@ const DESIGN = "250 L helium magnet cryostat";
 const stack = await startLocalStack({
   dataDir: ".data/bench-mariadb",
   port,
-  dbPort: Number(process.env.BENCH_DB_PORT ?? 3357),
+  dbPort: Number(process.env.BENCH_DB_PORT ?? 3359),
   smtpPort: Number(process.env.BENCH_SMTP_PORT ?? 2555),
   database: "frostfold_bench",
   freshDatabase: true,
