@@ -111,6 +111,7 @@ export function fewestLayersForTarget(
   requireShieldRoom(plan, block, max);
   const supports = supportHeats(plan, []).arriving;
   const cold = plan.sinks.length - 1;
+  const own = block.layers;
   const seen = new Map<number, number>();
   const heat = (n: number): number => {
     let q = seen.get(n);
@@ -122,17 +123,25 @@ export function fewestLayersForTarget(
     return q;
   };
   let answer: number | null;
-  if (heat(max) > target) answer = null;
-  else if (heat(1) <= target) answer = 1;
+  if (heat(1) <= target) answer = 1;
   else {
+    // Gallop up from the block's own count before bisecting: a long blanket is a long chain to
+    // solve, and the answer is usually near the design, so most searches never solve ~max layers.
     let lo = 1; // heat(lo) > target
-    let hi = max; // heat(hi) ≤ target
-    while (hi - lo > 1) {
-      const mid = (lo + hi) >> 1;
-      if (heat(mid) > target) lo = mid;
-      else hi = mid;
+    let hi = Math.min(max, Math.max(2, own));
+    while (hi < max && heat(hi) > target) {
+      lo = hi;
+      hi = Math.min(max, hi * 2);
     }
-    answer = hi;
+    if (heat(hi) > target) answer = null; // hi is max, and even that is not enough
+    else {
+      while (hi - lo > 1) {
+        const mid = (lo + hi) >> 1;
+        if (heat(mid) > target) lo = mid;
+        else hi = mid;
+      }
+      answer = hi;
+    }
   }
   const counts = [...seen.keys()].sort((a, b) => a - b);
   const monotone = counts.every((n, i) => i === 0 || seen.get(n)! <= seen.get(counts[i - 1])!);
