@@ -49,7 +49,7 @@ function layerSweep(assembly: AssemblyDesign, target: number | null): LayerSweep
   const room = MAX_TOTAL_SHIELDS - otherShields;
   const max = Math.min(room, Math.max(2, Math.min(SWEEP_MAX_LAYERS, 2 * layers)));
   const step = Math.max(1, Math.ceil(max / SWEEP_POINTS));
-  const points = sweepLayerCount(assembly, { blockIndex: layupIndex, from: 1, to: max, step }).map((p) => ({ layers: p.x, coldHeat_W: p.coldHeat_W }));
+  const points = sweepLayerCount(assembly, { blockIndex: layupIndex, from: 1, to: max, step, coldOnly: true }).map((p) => ({ layers: p.x, coldHeat_W: p.coldHeat_W }));
   const fewest = target != null ? fewestLayersForTarget(assembly, { blockIndex: layupIndex, targetColdHeat_W: target, max: Math.min(1000, MAX_TOTAL_SHIELDS - otherShields) }).layers : null;
   return { layupIndex, points, targetColdHeat_W: target, fewestLayers: fewest };
 }

@@ -195,10 +195,11 @@ export function supportHeats(plan: Plan, warnings: string[]) {
 }
 
 /** Heat arriving at each sink, blanket and supports, for one set of reflector faces. */
-export function arrivingHeats(plan: Plan, variant: Variant, supportsArriving: number[]): number[] {
+/** Heat arriving at every sink; with onlySink, only that sink's entry is complete (the others hold supports alone). */
+export function arrivingHeats(plan: Plan, variant: Variant, supportsArriving: number[], onlySink?: number): number[] {
   const into = supportsArriving.slice();
-  blanketHeats(plan, variant, "lateral", into);
-  if (plan.flatEnds > 0) blanketHeats(plan, variant, "ends", into);
+  blanketHeats(plan, variant, "lateral", into, onlySink);
+  if (plan.flatEnds > 0) blanketHeats(plan, variant, "ends", into, onlySink);
   return into;
 }
 

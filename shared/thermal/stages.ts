@@ -151,8 +151,10 @@ function heatMismatch(frames: BlockFrame[], t: number[]): number {
  * Heat arriving at every sink through the blanket (supports excluded), without layer
  * temperatures or ladders: what sweeps and the band need.
  */
-export function blanketHeats(plan: Plan, variant: Variant, part: ChainPart, into: number[]): number[] {
+export function blanketHeats(plan: Plan, variant: Variant, part: ChainPart, into: number[], onlySink?: number): number[] {
   for (const segment of segmentFrames(plan, variant, part)) {
+    // A segment adds heat to its own cold sink only: skipping the others leaves that sink exact.
+    if (onlySink !== undefined && segment.coldSink !== onlySink) continue;
     const t = segmentTemperatures(segment.frames, segment.warm.temperature_K, segment.cold.temperature_K);
     const k = segment.frames.length;
     into[segment.coldSink] += blockHeat(segment.frames[k - 1], t[k - 1], t[k]);

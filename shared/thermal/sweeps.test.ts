@@ -83,6 +83,16 @@ describe("sweepLayerCount", () => {
   });
 });
 
+describe("sweepLayerCount, cold vessel only", () => {
+  it("gives exactly the full sweep's heat into the cold vessel, without the stages' heats", () => {
+    const full = sweepLayerCount(cryostat, { blockIndex: 2, from: 1, to: 40, step: 3 });
+    const cold = sweepLayerCount(cryostat, { blockIndex: 2, from: 1, to: 40, step: 3, coldOnly: true });
+    expect(cold.map((p) => p.x)).toEqual(full.map((p) => p.x));
+    expect(cold.map((p) => p.coldHeat_W)).toEqual(full.map((p) => p.coldHeat_W));
+    expect(cold.every((p) => p.heatIntoStages_W.length === 0)).toBe(true);
+  });
+});
+
 describe("fewestLayersForTarget", () => {
   it("finds 139 shields for 0.1 W through 2 m² between 300 K and 77 K", () => {
     // Hand check of the gray-plate formula (Incropera et al., 6th ed., Sec. 13.3): N = 139 gives

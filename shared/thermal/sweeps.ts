@@ -25,8 +25,12 @@ export interface SweepRange {
 
 export const MAX_SWEEP_POINTS = 100_000;
 
-/** Heat against the layer count of one block; blockIndex is the block's index in the layup. */
-export function sweepLayerCount(design: AssemblyDesign, options: SweepRange & { blockIndex: number }): SweepPoint[] {
+/**
+ * Heat against the layer count of one block; blockIndex is the block's index in the layup. With
+ * coldOnly, only the cold vessel's heat is solved for (heatIntoStages_W comes back empty): the
+ * segments that end at a stage are skipped, which is what a layer-count chart of the vessel needs.
+ */
+export function sweepLayerCount(design: AssemblyDesign, options: SweepRange & { blockIndex: number; coldOnly?: boolean }): SweepPoint[] {
   requireOptions(options, "{ blockIndex, from, to, step }");
   const plan = planAssembly(design);
   const block = blockAt(plan, design, options.blockIndex);
@@ -35,9 +39,11 @@ export function sweepLayerCount(design: AssemblyDesign, options: SweepRange & { 
   const step = requireWhole("step", options.step, 1, MAX_BLOCK_LAYERS);
   requireShieldRoom(plan, block, to);
   const supports = supportHeats(plan, []).arriving;
+  const cold = plan.sinks.length - 1;
   return points(from, to, step, (x) => {
     block.layers = x;
-    return arrivingHeats(plan, "nominal", supports);
+    if (!options.coldOnly) return arrivingHeats(plan, "nominal", supports);
+    return [arrivingHeats(plan, "nominal", supports, cold)[cold]];
   });
 }
 
@@ -117,7 +123,7 @@ export function fewestLayersForTarget(
     let q = seen.get(n);
     if (q === undefined) {
       block.layers = n;
-      q = arrivingHeats(plan, "nominal", supports)[cold];
+      q = arrivingHeats(plan, "nominal", supports, cold)[cold];
       seen.set(n, q);
     }
     return q;
