@@ -70,8 +70,7 @@ export function boilOffTestsRouter(ctx: ServiceContext): Router {
 
   router.patch("/:id", requirePermission("comment:test"), async (req, res) => {
     const { id } = parseInput(TestParamsSchema, req.params, "path");
-    const { notes } = parseInput(PatchTestInputSchema, req.body);
-    res.json(await tests.updateNotes(ctx, actorOf(req), id, notes));
+    res.json(await tests.updateTest(ctx, actorOf(req), id, parseInput(PatchTestInputSchema, req.body)));
   });
 
   router.delete("/:id", requirePermission("delete:test"), async (req, res) => {

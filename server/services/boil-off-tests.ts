@@ -1,5 +1,6 @@
 import type { DesignContent } from "../../shared/schemas/design";
-import type { CreateTestInput, LogInfo, StoredFile, TestDetail, TestStatus, TestSummary } from "../../shared/schemas/boil-off-test";
+import { createHash } from "node:crypto";
+import type { CreateTestInput, LogInfo, PatchTestInput, StoredFile, TestDetail, TestMethod, TestStatus, TestSummary } from "../../shared/schemas/boil-off-test";
 import { CRYOGEN_IDS, DEFAULT_VENT_REFERENCE, type CryogenId } from "../../shared/thermal";
 import type { ResolvedMaterial } from "../../shared/design/to-assembly";
 import { insertAuditEntry } from "../db/repositories/audit";
@@ -8,8 +9,10 @@ import { findRevision } from "../db/repositories/designs";
 import type { Tx } from "../db/client";
 import { conflict, invalidInput, notFound } from "../errors";
 import { newId } from "../ids";
+import { decodeSeries } from "../storage/series-codec";
 import { raiseAlertIfOver } from "./alerts";
 import type { Actor, ServiceContext } from "./context";
+import { analyseSeries, analysisContextOf, resultColumns } from "./test-analysis";
 
 /** A test of this organization, or a 404 that does not tell whether it exists elsewhere. */
 export async function loadTest(db: Tx, actor: Actor, id: string, lock = false) {
@@ -55,6 +58,8 @@ export async function getTest(ctx: ServiceContext, actor: Actor, id: string): Pr
     ventReference: t.ventReference,
     capacity_L: t.capacity_L,
     fullScale_mm: t.fullScale_mm,
+    tareMass_kg: t.tareMass_kg,
+    fillFraction: t.fillFraction,
     ambientTemperature_K: t.ambientTemperature_K,
     ambientPressure_Pa: t.ambientPressure_Pa,
     notes: t.notes,
@@ -106,6 +111,7 @@ export async function createTest(ctx: ServiceContext, actor: Actor, input: Creat
     const message = "capacity_L is required for a level test: the design gives no capacity for this stage";
     throw invalidInput(message, [{ path: "capacity_L", message }]);
   }
+  checkLiquidMassFields(input.method, input);
   const id = newId();
   const now = ctx.clock();
   await ctx.db.transaction(async (tx) => {
@@ -123,6 +129,8 @@ export async function createTest(ctx: ServiceContext, actor: Actor, input: Creat
       ventReference: input.method === "vent-flow" ? (input.ventReference ?? DEFAULT_VENT_REFERENCE) : null,
       capacity_L,
       fullScale_mm: input.fullScale_mm ?? null,
+      tareMass_kg: input.tareMass_kg ?? null,
+      fillFraction: input.fillFraction ?? null,
       ambientTemperature_K: input.ambientTemperature_K ?? null,
       ambientPressure_Pa: input.ambientPressure_Pa ?? null,
       notes: input.notes ?? "",
@@ -137,14 +145,50 @@ export async function createTest(ctx: ServiceContext, actor: Actor, input: Creat
   return getTest(ctx, actor, id);
 }
 
-export async function updateNotes(ctx: ServiceContext, actor: Actor, id: string, notes: string): Promise<TestDetail> {
+/** The tare mass belongs to a weighing test and the fill fraction to a vent-flow test. */
+function checkLiquidMassFields(method: TestMethod, fields: { tareMass_kg?: number | null; fillFraction?: number | null }) {
+  const issues = [];
+  if (fields.tareMass_kg != null && method !== "weighing") issues.push({ path: "tareMass_kg", message: `tareMass_kg applies to a weighing test only (this one is ${method})` });
+  if (fields.fillFraction != null && method !== "vent-flow") issues.push({ path: "fillFraction", message: `fillFraction applies to a vent-flow test only (this one is ${method})` });
+  if (issues.length > 0) throw invalidInput(issues.map((i) => i.message).join("; "), issues);
+}
+
+/**
+ * Notes, and the tare mass or fill fraction the barometric correction needs. Changing either
+ * re-runs the analysis on the stored series (read outside the transaction, like a window move);
+ * an accepted test keeps its figures, so only its notes change.
+ */
+export async function updateTest(ctx: ServiceContext, actor: Actor, id: string, patch: PatchTestInput): Promise<TestDetail> {
+  const { test } = await loadTest(ctx.db, actor, id);
+  const figures: { tareMass_kg?: number | null; fillFraction?: number | null } = {};
+  if (patch.tareMass_kg !== undefined) figures.tareMass_kg = patch.tareMass_kg;
+  if (patch.fillFraction !== undefined) figures.fillFraction = patch.fillFraction;
+  const changesFigures = Object.keys(figures).length > 0;
+  if (changesFigures) {
+    if (test.status === "accepted") throw conflict("test_accepted", "This test is accepted, so its figures are frozen. Only its notes can change.");
+    checkLiquidMassFields(test.method, figures);
+  }
+  const result = changesFigures && test.log ? await reanalyse(ctx, { ...test, ...figures }) : null;
   const now = ctx.clock();
   await ctx.db.transaction(async (tx) => {
-    await loadTest(tx, actor, id, true);
-    await repo.updateTest(tx, actor.organizationId, id, { notes, updatedAt: now });
-    await insertAuditEntry(tx, actor.organizationId, { actorUserId: actor.userId, action: "test.notes", entityType: "boil_off_test", entityId: id, detail: { length: notes.length } }, now);
+    const { test: current } = await loadTest(tx, actor, id, true);
+    if (changesFigures && current.status === "accepted") throw conflict("test_accepted", "This test is accepted, so its figures are frozen. Only its notes can change.");
+    if (result && current.log?.fileId !== test.log?.fileId) throw conflict("log_replaced", "A new log was uploaded meanwhile. Send the change again.");
+    await repo.updateTest(tx, actor.organizationId, id, { ...(patch.notes !== undefined ? { notes: patch.notes } : {}), ...figures, ...(result ?? {}), updatedAt: now });
+    const detail = { ...(patch.notes !== undefined ? { notesLength: patch.notes.length } : {}), ...figures, ...(result ? { ratio: result.ratio } : {}) };
+    await insertAuditEntry(tx, actor.organizationId, { actorUserId: actor.userId, action: changesFigures ? "test.update" : "test.notes", entityType: "boil_off_test", entityId: id, detail }, now);
   });
   return getTest(ctx, actor, id);
+}
+
+/** The analysis with the row's current window (or the suggestion), from the stored series. */
+async function reanalyse(ctx: ServiceContext, test: repo.TestRow) {
+  const log = test.log!;
+  const stored = await ctx.objects.getBuffer(log.seriesKey);
+  if (createHash("sha256").update(stored).digest("hex") !== log.seriesSha256) throw new Error(`the stored series ${log.seriesKey} does not match its SHA-256`);
+  const chosen = !test.windowSuggested && test.windowStart_s !== null && test.windowEnd_s !== null ? { start_s: test.windowStart_s, end_s: test.windowEnd_s } : null;
+  const { analysis, chart } = analyseSeries(decodeSeries(stored), analysisContextOf(test, log.firstReadingAt, log.suggestedWindow), chosen);
+  return resultColumns(analysis, chart, chosen === null);
 }
 
 /** Rows go in one transaction; the objects after it commits (an orphan object harms nobody, a dangling row would). */

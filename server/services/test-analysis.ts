@@ -12,8 +12,10 @@ import {
   VENT_REFERENCE_CONDITIONS,
   ventedGasFactor,
   type CryogenId,
+  type FluidProperties,
   type VentReference,
 } from "../../shared/thermal";
+import type { TestRow } from "../db/repositories/boil-off-tests";
 import { invalidInput } from "../errors";
 import type { StoredSeries } from "../storage/series-codec";
 
@@ -32,10 +34,41 @@ export interface AnalysisContext {
   capacity_L: number | null;
   ventReference: VentReference | null;
   ambientPressure_Pa: number | null;
+  /** Weighing: the empty vessel's mass (readings − tare = the liquid). */
+  tareMass_kg: number | null;
+  /** Vent-flow: the share of the capacity filled at the first reading. */
+  fillFraction: number | null;
   firstReadingAt: string | null;
   /** The log's suggestion when already worked out (it depends on the log only). */
   suggestedWindow?: { start_s: number; end_s: number };
 }
+
+export const analysisContextOf = (t: TestRow, firstReadingAt: string | null, suggestedWindow?: { start_s: number; end_s: number }): AnalysisContext => ({
+  method: t.method,
+  cryogen: t.cryogen as CryogenId,
+  stageIndex: t.stageIndex,
+  stageLabel: t.stageLabel,
+  predictedHeatLeak_W: t.predictedHeatLeak_W,
+  predictedEvaporationRate: t.predictedEvaporationRate,
+  capacity_L: t.capacity_L,
+  ventReference: t.ventReference,
+  ambientPressure_Pa: t.ambientPressure_Pa,
+  tareMass_kg: t.tareMass_kg,
+  fillFraction: t.fillFraction,
+  firstReadingAt,
+  suggestedWindow,
+});
+
+/** The test row's columns that hold an analysis. */
+export const resultColumns = (analysis: Analysis, chart: Series, suggested: boolean) => ({
+  windowStart_s: analysis.window.start_s,
+  windowEnd_s: analysis.window.end_s,
+  windowSuggested: suggested,
+  analysis,
+  chart,
+  measuredHeatLeak_W: analysis.measuredHeatLeak_W,
+  ratio: analysis.ratio,
+});
 
 /**
  * The suggestion is a heuristic over local slopes and costs O(n log n) several times over; past
@@ -94,18 +127,34 @@ export function analyseSeries(series: StoredSeries, ctx: AnalysisContext, chosen
   const interval95: [number, number] = flow ? [rate - tRate * rateStdError, rate + tRate * rateStdError] : fit.interval95;
   const toEngine = ctx.method === "level" ? 1 / 100 : 1; // % of capacity → fraction
 
-  let pressureSum = 0;
-  if (series.pressure) for (let i = lo; i < hi; i++) pressureSum += series.pressure[i];
-  const barometric_Pa = series.pressure ? pressureSum / (hi - lo) : (ctx.ambientPressure_Pa ?? undefined);
-  const heat = measuredHeatLeak({
+  const fluid = cryogenProperties(ctx.cryogen);
+  // The barometer's mean and least-squares trend over the same window.
+  const pressureFit = series.pressure ? fitRate(series.time.subarray(lo, hi), series.pressure.subarray(lo, hi), window) : null;
+  const pressureTrend = pressureFit ? { slope_Pa_per_s: pressureFit.rate, stdError_Pa_per_s: pressureFit.rateStdError } : null;
+  const engineInput = {
     method: ctx.method,
     rate: rate * toEngine,
     rateStdError: rateStdError * toEngine,
     cryogen: ctx.cryogen,
     capacity_L: ctx.capacity_L ?? undefined,
     ventReference: ventReference ?? undefined,
-    barometricPressure_Pa: barometric_Pa,
-  });
+    barometricPressure_Pa: pressureFit ? pressureFit.mean : (ctx.ambientPressure_Pa ?? undefined),
+  };
+  const uncorrected = measuredHeatLeak(engineInput);
+  const liquid = liquidMass(ctx, fluid, fit.mean, (window.start_s + window.end_s) / 2, uncorrected.ventedHeatLeak_W);
+  const heat =
+    pressureTrend && "mass_kg" in liquid ? measuredHeatLeak({ ...engineInput, pressureTrend, liquidMass_kg: liquid.mass_kg }) : uncorrected;
+  const correction: NonNullable<Analysis["barometricCorrection"]> = heat.barometricCorrection.applied
+    ? {
+        applied: true,
+        correction_W: heat.barometricCorrection.correction_W,
+        correctionStdError_W: heat.barometricCorrection.correctionStdError_W,
+        liquidMass_kg: heat.barometricCorrection.liquidMass_kg,
+        liquidMassBasis: "basis" in liquid ? liquid.basis : "",
+        liquidHeatCapacity_J_per_kg_K: heat.barometricCorrection.liquidHeatCapacity_J_per_kg_K,
+        saturationTemperatureSlope_K_per_Pa: heat.barometricCorrection.saturationTemperatureSlope_K_per_Pa,
+      }
+    : { applied: false, reason: pressureTrend && "reason" in liquid ? liquid.reason : heat.barometricCorrection.reason };
   const q = heat.measuredHeatLeak_W;
   const qSe = heat.measuredHeatLeakStdError_W;
   const warnings = [...heat.warnings];
@@ -116,7 +165,6 @@ export function analyseSeries(series: StoredSeries, ctx: AnalysisContext, chosen
   } else {
     warnings.push(`the revision predicts no heat into ${ctx.stageLabel}, so there is no ratio to the prediction`);
   }
-  const fluid = cryogenProperties(ctx.cryogen);
 
   const analysis: Analysis = {
     window,
@@ -154,12 +202,51 @@ export function analyseSeries(series: StoredSeries, ctx: AnalysisContext, chosen
     ventedGasFactor: ventedGasFactor(fluid),
     barometric:
       heat.barometricPressure_Pa !== undefined
-        ? { meanPressure_Pa: heat.barometricPressure_Pa, source: series.pressure ? "log" : "test", saturationTemperatureShift_K: heat.saturationTemperatureShift_K ?? 0, correctionApplied: false }
+        ? { meanPressure_Pa: heat.barometricPressure_Pa, source: series.pressure ? "log" : "test", saturationTemperatureShift_K: heat.saturationTemperatureShift_K ?? 0, correctionApplied: heat.barometricCorrectionApplied }
         : null,
+    uncorrectedHeatLeak_W: heat.ventedHeatLeak_W,
+    uncorrectedHeatLeakStdError_W: heat.ventedHeatLeakStdError_W,
+    pressureTrend,
+    barometricCorrectionApplied: heat.barometricCorrectionApplied,
+    barometricCorrection: correction,
     warnings,
     uncertaintyNote: UNCERTAINTY_NOTE,
   };
   return { analysis, chart: chartOf(series, ctx, analysis, lo, hi) };
+}
+
+type LiquidMass = { mass_kg: number; basis: string } | { reason: string };
+
+/**
+ * The liquid in the vessel during the window, for the barometric correction. Weighing: the mean
+ * reading less the empty vessel's tare. Level: the mean level × capacity × liquid density.
+ * Vent-flow: the starting fill × capacity × liquid density, less what boiled off up to the
+ * window's middle (the vented heat over h_fg).
+ */
+function liquidMass(ctx: AnalysisContext, fluid: FluidProperties, meanReading: number, windowMiddle_s: number, vented_W: number): LiquidMass {
+  const fromVolume = (litres: number) => (litres / 1000) * fluid.liquidDensity_kg_per_m3;
+  let mass_kg: number;
+  let basis: string;
+  switch (ctx.method) {
+    case "weighing":
+      if (ctx.tareMass_kg === null) return { reason: "no tare mass on the test (the scale reading includes the vessel)" };
+      mass_kg = meanReading - ctx.tareMass_kg;
+      basis = `mean reading ${meanReading.toPrecision(5)} kg less the tare ${ctx.tareMass_kg} kg`;
+      break;
+    case "level":
+      if (ctx.capacity_L === null) return { reason: "no capacity on the test" };
+      mass_kg = fromVolume((meanReading / 100) * ctx.capacity_L);
+      basis = `mean level ${meanReading.toPrecision(4)} % of ${ctx.capacity_L} L`;
+      break;
+    case "vent-flow":
+      if (ctx.capacity_L === null) return { reason: "no capacity on the test" };
+      if (ctx.fillFraction === null) return { reason: "no starting fill fraction on the test" };
+      mass_kg = fromVolume(ctx.fillFraction * ctx.capacity_L) - (Math.max(vented_W, 0) / fluid.latentHeat_J_per_kg) * windowMiddle_s;
+      basis = `fill ${ctx.fillFraction} of ${ctx.capacity_L} L less the boil-off up to the window's middle`;
+      break;
+  }
+  if (!(mass_kg > 0)) return { reason: `the liquid mass works out at ${mass_kg.toPrecision(3)} kg (${basis}): check the test's figures` };
+  return { mass_kg, basis };
 }
 
 function chartOf(series: StoredSeries, ctx: AnalysisContext, a: Analysis, lo: number, hi: number): Series {

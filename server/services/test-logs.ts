@@ -1,7 +1,6 @@
 import { createReadStream } from "node:fs";
 import { createHash } from "node:crypto";
 import { VALUE_UNITS, VALUE_UNIT_IDS, type Analysis, type LogPreview, type LogUploadFields, type Series, type TestDetail, type WindowInput } from "../../shared/schemas/boil-off-test";
-import type { CryogenId } from "../../shared/thermal";
 import { insertAuditEntry } from "../db/repositories/audit";
 import * as repo from "../db/repositories/boil-off-tests";
 import type { StoredLog } from "../db/schema/boil-off-tests";
@@ -12,7 +11,7 @@ import { getTest, loadTest } from "./boil-off-tests";
 import type { Actor, ServiceContext } from "./context";
 import { previewLoggerFile } from "./log-preview";
 import { parseLoggerFile, type UploadedFile } from "./logger-files";
-import { analyseSeries, type AnalysisContext } from "./test-analysis";
+import { analyseSeries, analysisContextOf as contextOf, resultColumns } from "./test-analysis";
 import { safeFilename } from "./test-attachments";
 
 /**
@@ -26,20 +25,6 @@ export async function previewLog(ctx: ServiceContext, actor: Actor, id: string, 
   const { test } = await loadTest(ctx.db, actor, id);
   return previewLoggerFile(file, test.method);
 }
-
-const contextOf = (t: repo.TestRow, firstReadingAt: string | null, suggestedWindow?: { start_s: number; end_s: number }): AnalysisContext => ({
-  method: t.method,
-  cryogen: t.cryogen as CryogenId,
-  stageIndex: t.stageIndex,
-  stageLabel: t.stageLabel,
-  predictedHeatLeak_W: t.predictedHeatLeak_W,
-  predictedEvaporationRate: t.predictedEvaporationRate,
-  capacity_L: t.capacity_L,
-  ventReference: t.ventReference,
-  ambientPressure_Pa: t.ambientPressure_Pa,
-  firstReadingAt,
-  suggestedWindow,
-});
 
 /** reading × factor = the series unit; a level in mm becomes % of the gauge's full scale. */
 function valueFactor(t: repo.TestRow, fields: LogUploadFields): number {
@@ -134,16 +119,6 @@ export async function ingestLog(ctx: ServiceContext, actor: Actor, id: string, f
   await ctx.objects.delete(oldKeys).catch((error: Error) => ctx.logger.warn({ err: error, keys: oldKeys }, "a replaced log's objects were left in the store"));
   return getTest(ctx, actor, id);
 }
-
-const resultColumns = (analysis: Analysis, chart: Series, suggested: boolean) => ({
-  windowStart_s: analysis.window.start_s,
-  windowEnd_s: analysis.window.end_s,
-  windowSuggested: suggested,
-  analysis,
-  chart,
-  measuredHeatLeak_W: analysis.measuredHeatLeak_W,
-  ratio: analysis.ratio,
-});
 
 /**
  * The series object is read outside the transaction; the row is then updated only if the log is

@@ -72,6 +72,10 @@ const whole = (field: string, min: number, max: number) => {
 };
 const NotesSchema = z.string({ error: "notes must be text" }).trim().max(5000, "notes must be at most 5000 characters");
 const methodSchema = z.enum(TEST_METHODS, { error: `method must be one of ${TEST_METHODS.join(", ")}` });
+/** The ranges the form shows beside the two fields. */
+export const TARE_MASS_RANGE_KG = { min: 0, max: 100_000 } as const;
+const TareMassSchema = num("tareMass_kg", "kg", TARE_MASS_RANGE_KG.min, TARE_MASS_RANGE_KG.max);
+const FillFractionSchema = num("fillFraction", "", 0, 1, true);
 
 export const CreateTestInputSchema = z.object({
   designId: IdSchema,
@@ -89,10 +93,18 @@ export const CreateTestInputSchema = z.object({
   capacity_L: num("capacity_L", "L", 0, 1e6, true).optional(),
   /** Level gauge height that reads full; needed for a level log in mm. */
   fullScale_mm: num("fullScale_mm", "mm", 0, 1e5, true).optional(),
+  /** Weighing: the empty vessel's mass, so reading − tare is the liquid (for the barometric correction). */
+  tareMass_kg: TareMassSchema.optional(),
+  /** Vent-flow: the share of the capacity filled at the first reading (for the barometric correction). */
+  fillFraction: FillFractionSchema.optional(),
 });
 export type CreateTestInput = z.infer<typeof CreateTestInputSchema>;
 
-export const PatchTestInputSchema = z.object({ notes: NotesSchema });
+/** At least one field; null clears the tare mass or the fill fraction. */
+export const PatchTestInputSchema = z
+  .object({ notes: NotesSchema.optional(), tareMass_kg: TareMassSchema.nullable().optional(), fillFraction: FillFractionSchema.nullable().optional() })
+  .refine((p) => p.notes !== undefined || p.tareMass_kg !== undefined || p.fillFraction !== undefined, { path: ["notes"], message: "send notes, tareMass_kg or fillFraction" });
+export type PatchTestInput = z.infer<typeof PatchTestInputSchema>;
 
 // Multipart form fields arrive as strings; an empty optional field counts as left out.
 const blankToUndefined = (v: unknown) => (typeof v === "string" && v.trim() === "" ? undefined : v);
@@ -217,8 +229,31 @@ export const AnalysisSchema = z.object({
   ventReferenceLabel: z.string().nullable(),
   ventedGasFactor: z.number(),
   barometric: z
-    .object({ meanPressure_Pa: z.number(), source: z.enum(["log", "test"]), saturationTemperatureShift_K: z.number(), correctionApplied: z.literal(false) })
+    .object({ meanPressure_Pa: z.number(), source: z.enum(["log", "test"]), saturationTemperatureShift_K: z.number(), correctionApplied: z.boolean() })
     .nullable(),
+  // The fields below are absent on analyses stored before the barometric correction existed.
+  /** The heat leak from the boil-off rate alone; measuredHeatLeak_W adds the barometric correction when applied. */
+  uncorrectedHeatLeak_W: z.number().optional(),
+  uncorrectedHeatLeakStdError_W: z.number().optional(),
+  /** Least-squares slope of the log's barometer column over the window; null without one. */
+  pressureTrend: z.object({ slope_Pa_per_s: z.number(), stdError_Pa_per_s: z.number() }).nullable().optional(),
+  barometricCorrectionApplied: z.boolean().optional(),
+  barometricCorrection: z
+    .discriminatedUnion("applied", [
+      z.object({
+        applied: z.literal(true),
+        /** m·c_p·(dT_sat/dp)·(dp/dt), W: positive while the pressure rises. */
+        correction_W: z.number(),
+        correctionStdError_W: z.number(),
+        liquidMass_kg: z.number(),
+        /** How the liquid mass was found (readings − tare, mean level × capacity, fill × capacity). */
+        liquidMassBasis: z.string(),
+        liquidHeatCapacity_J_per_kg_K: z.number(),
+        saturationTemperatureSlope_K_per_Pa: z.number(),
+      }),
+      z.object({ applied: z.literal(false), reason: z.string() }),
+    ])
+    .optional(),
   warnings: z.array(z.string()),
   uncertaintyNote: z.string(),
 });
@@ -229,6 +264,8 @@ export const TestDetailSchema = TestSummarySchema.extend({
   ventReference: z.enum(VENT_REFERENCES).nullable(),
   capacity_L: z.number().nullable(),
   fullScale_mm: z.number().nullable(),
+  tareMass_kg: z.number().nullable(),
+  fillFraction: z.number().nullable(),
   ambientTemperature_K: z.number().nullable(),
   ambientPressure_Pa: z.number().nullable(),
   notes: z.string(),

@@ -31,6 +31,9 @@ export interface FluidProperties {
   vapourDensity_kg_per_m3: number;
   molarMass_kg_per_mol: number;
   source: string;
+  /** Isobaric heat capacity of the saturated liquid at 1 atm (the barometric correction's c_p). */
+  liquidHeatCapacity_J_per_kg_K: number;
+  liquidHeatCapacitySource: string;
 }
 
 /** The pressure every row of CRYOGENS is taken at. */
@@ -50,6 +53,8 @@ export const CRYOGENS: Record<CryogenId, FluidProperties> = {
     source:
       `${WEBBOOK} (helium equation of state); T_sat is the ITS-90 4He vapour-pressure point; ` +
       "all values from memory, consistent with Van Sciver, Helium Cryogenics, 2nd ed., ch. 2",
+    liquidHeatCapacity_J_per_kg_K: 4_480,
+    liquidHeatCapacitySource: `${WEBBOOK}, c_p of the saturated liquid, from memory (about ±2 %)`,
   },
   "hydrogen-normal": {
     id: "hydrogen-normal",
@@ -63,6 +68,8 @@ export const CRYOGENS: Record<CryogenId, FluidProperties> = {
       `${WEBBOOK} (Leachman et al. 2009 equation of state): T_sat and liquid density read off the ` +
       "table; latent heat extrapolated from the 0.5 and 0.6 atm rows (about ±1 %); vapour density " +
       "from memory (NBS, Stewart & Roder, 0.6606 mol/L)",
+    liquidHeatCapacity_J_per_kg_K: 9_700,
+    liquidHeatCapacitySource: `${WEBBOOK}, c_p of the saturated liquid, from memory (about ±2 %)`,
   },
   "hydrogen-para": {
     id: "hydrogen-para",
@@ -73,6 +80,8 @@ export const CRYOGENS: Record<CryogenId, FluidProperties> = {
     vapourDensity_kg_per_m3: 1.3378,
     molarMass_kg_per_mol: 2.01588e-3,
     source: `${WEBBOOK} (Leachman et al. 2009 equation of state), from memory; latent heat about ±1 %`,
+    liquidHeatCapacity_J_per_kg_K: 9_690,
+    liquidHeatCapacitySource: `${WEBBOOK}, c_p of the saturated liquid, from memory (about ±2 %)`,
   },
   neon: {
     id: "neon",
@@ -83,6 +92,8 @@ export const CRYOGENS: Record<CryogenId, FluidProperties> = {
     vapourDensity_kg_per_m3: 9.58,
     molarMass_kg_per_mol: 20.1797e-3,
     source: `${WEBBOOK} (Katti, Jacobsen et al. neon equation of state), from memory; latent heat about ±1 %`,
+    liquidHeatCapacity_J_per_kg_K: 1_860,
+    liquidHeatCapacitySource: `${WEBBOOK}, c_p of the saturated liquid, from memory (about ±2 %)`,
   },
   nitrogen: {
     id: "nitrogen",
@@ -93,6 +104,8 @@ export const CRYOGENS: Record<CryogenId, FluidProperties> = {
     vapourDensity_kg_per_m3: 4.6079,
     molarMass_kg_per_mol: 28.0134e-3,
     source: `${WEBBOOK} (Span et al. 2000 equation of state), from memory`,
+    liquidHeatCapacity_J_per_kg_K: 2_041,
+    liquidHeatCapacitySource: `${WEBBOOK}, c_p of the saturated liquid, from memory`,
   },
   argon: {
     id: "argon",
@@ -103,6 +116,8 @@ export const CRYOGENS: Record<CryogenId, FluidProperties> = {
     vapourDensity_kg_per_m3: 5.7748,
     molarMass_kg_per_mol: 39.948e-3,
     source: `${WEBBOOK} (Tegeler, Span & Wagner 1999 equation of state), from memory`,
+    liquidHeatCapacity_J_per_kg_K: 1_117,
+    liquidHeatCapacitySource: `${WEBBOOK}, c_p of the saturated liquid, from memory`,
   },
   oxygen: {
     id: "oxygen",
@@ -113,6 +128,8 @@ export const CRYOGENS: Record<CryogenId, FluidProperties> = {
     vapourDensity_kg_per_m3: 4.4671,
     molarMass_kg_per_mol: 31.9988e-3,
     source: `${WEBBOOK} (Schmidt & Wagner 1985 equation of state), from memory`,
+    liquidHeatCapacity_J_per_kg_K: 1_699,
+    liquidHeatCapacitySource: `${WEBBOOK}, c_p of the saturated liquid, from memory`,
   },
   methane: {
     id: "methane",
@@ -123,6 +140,8 @@ export const CRYOGENS: Record<CryogenId, FluidProperties> = {
     vapourDensity_kg_per_m3: 1.8164,
     molarMass_kg_per_mol: 16.0425e-3,
     source: `${WEBBOOK} (Setzmann & Wagner 1991 equation of state), from memory`,
+    liquidHeatCapacity_J_per_kg_K: 3_481,
+    liquidHeatCapacitySource: `${WEBBOOK}, c_p of the saturated liquid, from memory`,
   },
 };
 

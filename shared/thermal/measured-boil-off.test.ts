@@ -1,6 +1,8 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { boilOff } from "./boil-off";
 import { ThermalInputError } from "./errors";
+import { CRYOGEN_IDS } from "./fluids";
 import { compareWithPrediction, fitRate, measuredHeatLeak, suggestSteadyWindow } from "./measured-boil-off";
 
 // All logs below are invented: straight lines (and one cool-down transient) plus seeded Gaussian
@@ -230,6 +232,90 @@ describe("measuredHeatLeak", () => {
     const error = thrown(() => measuredHeatLeak(input as Parameters<typeof measuredHeatLeak>[0]));
     expect(error).toBeInstanceOf(ThermalInputError);
     expect(error.field).toBe(field);
+  });
+});
+
+describe("measuredHeatLeak: barometric correction", () => {
+  // Invented case: 200 kg of liquid nitrogen, the barometer rising 100 Pa/h (1 hPa/h) ± 10 Pa/h,
+  // boil-off 2e-5 kg/s vented ± 1e-7 kg/s.
+  const base = { method: "weighing" as const, rate: -2e-5, rateStdError: 1e-7, cryogen: "nitrogen" as const };
+  const rising = { slope_Pa_per_s: 100 / 3600, stdError_Pa_per_s: 10 / 3600 };
+
+  it("matches a hand calculation for liquid nitrogen: 200 kg, +100 Pa/h gives +0.9502 W", () => {
+    // Hand-worked from the fluid table (NIST Chemistry WebBook saturation at 1 atm, from memory:
+    // T 77.355 K, ρ_l 806.08, ρ_v 4.6079 kg/m³, h_fg 199.18 kJ/kg, c_p,l 2.041 kJ/(kg·K)):
+    // Clapeyron dT/dp = 77.355 × (1/4.6079 − 1/806.08) / 199180 = 77.355 × 0.215778 / 199180
+    //   = 8.3801e-5 K/Pa (about 0.084 K/kPa);
+    // m·c_p·dT/dp = 200 × 2041 × 8.3801e-5 = 34.208 J/Pa; × 100/3600 Pa/s = 0.95021 W;
+    // its standard error 34.208 × 10/3600 = 0.095021 W, in quadrature with the vented heat's.
+    const plain = measuredHeatLeak(base);
+    const result = measuredHeatLeak({ ...base, pressureTrend: rising, liquidMass_kg: 200 });
+    expect(result.barometricCorrectionApplied).toBe(true);
+    const c = result.barometricCorrection;
+    if (!c.applied) throw new Error("expected the correction to be applied");
+    expect(c.saturationTemperatureSlope_K_per_Pa).toBeCloseTo(8.3801e-5, 8);
+    expect(c.correction_W).toBeCloseTo(0.95021, 4);
+    expect(c.correctionStdError_W).toBeCloseTo(0.095021, 5);
+    expect(result.ventedHeatLeak_W).toBe(plain.measuredHeatLeak_W);
+    expect(result.measuredHeatLeak_W).toBeCloseTo(plain.measuredHeatLeak_W + 0.95021, 4);
+    expect(result.measuredHeatLeakStdError_W).toBeCloseTo(Math.hypot(plain.measuredHeatLeakStdError_W, 0.095021), 5);
+  });
+
+  it("adds heat while the pressure rises and takes it off while it falls", () => {
+    const up = measuredHeatLeak({ ...base, pressureTrend: rising, liquidMass_kg: 50 });
+    const down = measuredHeatLeak({ ...base, pressureTrend: { ...rising, slope_Pa_per_s: -rising.slope_Pa_per_s }, liquidMass_kg: 50 });
+    expect(up.measuredHeatLeak_W).toBeGreaterThan(up.ventedHeatLeak_W);
+    expect(down.measuredHeatLeak_W).toBeLessThan(down.ventedHeatLeak_W);
+  });
+
+  it("gives no correction for a flat barometer, and only its slope's uncertainty", () => {
+    const flat = measuredHeatLeak({ ...base, pressureTrend: { slope_Pa_per_s: 0, stdError_Pa_per_s: 0 }, liquidMass_kg: 200 });
+    expect(flat.barometricCorrectionApplied).toBe(true);
+    expect(flat.measuredHeatLeak_W).toBe(flat.ventedHeatLeak_W);
+    expect(flat.measuredHeatLeakStdError_W).toBe(flat.ventedHeatLeakStdError_W);
+  });
+
+  it("keeps the vented heat and says why when the trend or the liquid mass is unknown", () => {
+    const noMass = measuredHeatLeak({ ...base, pressureTrend: rising });
+    expect(noMass.barometricCorrection).toEqual({ applied: false, reason: expect.stringContaining("liquid mass") });
+    expect(noMass.measuredHeatLeak_W).toBe(noMass.ventedHeatLeak_W);
+    const noTrend = measuredHeatLeak({ ...base, liquidMass_kg: 200 });
+    expect(noTrend.barometricCorrection).toEqual({ applied: false, reason: expect.stringContaining("barometer") });
+  });
+
+  it("warns when the barometer moves faster than weather (over 1 kPa/h)", () => {
+    const fast = measuredHeatLeak({ ...base, pressureTrend: { slope_Pa_per_s: 0.5, stdError_Pa_per_s: 0 }, liquidMass_kg: 10 });
+    expect(fast.warnings.join(" ")).toContain("faster than weather");
+  });
+
+  it.each<[string, Record<string, unknown>]>([
+    ["liquidMass_kg", { liquidMass_kg: 0 }],
+    ["pressureTrend.slope_Pa_per_s", { pressureTrend: { slope_Pa_per_s: Number.NaN, stdError_Pa_per_s: 0 } }],
+    ["pressureTrend.stdError_Pa_per_s", { pressureTrend: { slope_Pa_per_s: 0, stdError_Pa_per_s: -1 } }],
+  ])("refuses a bad %s", (field, override) => {
+    const input = { ...base, pressureTrend: rising, liquidMass_kg: 10, ...override };
+    expect(thrown(() => measuredHeatLeak(input as Parameters<typeof measuredHeatLeak>[0])).field).toBe(field);
+  });
+
+  it("is linear in the pressure slope and in the liquid mass (property)", () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...CRYOGEN_IDS),
+        fc.double({ min: -1, max: 1, noNaN: true }),
+        fc.double({ min: 1e-3, max: 1e4, noNaN: true }),
+        fc.double({ min: 0.01, max: 100, noNaN: true }),
+        (cryogen, slope, mass, k) => {
+          const at = (s: number, m: number) => {
+            const c = measuredHeatLeak({ ...base, cryogen, pressureTrend: { slope_Pa_per_s: s, stdError_Pa_per_s: 0 }, liquidMass_kg: m }).barometricCorrection;
+            if (!c.applied) throw new Error("expected the correction to be applied");
+            return c.correction_W;
+          };
+          const a = at(slope, mass);
+          const tolerance = 1e-12 * Math.abs(k * a) + 1e-300;
+          return Math.abs(at(k * slope, mass) - k * a) <= tolerance && Math.abs(at(slope, k * mass) - k * a) <= tolerance;
+        },
+      ),
+    );
   });
 });
 

@@ -5,7 +5,13 @@ import {
   heatFromVentedMass,
   type VentReference,
 } from "./boil-off";
-import { cryogenProperties, saturationTemperatureSlope_K_per_Pa, SATURATION_PRESSURE_PA, type CryogenId } from "./fluids";
+import {
+  cryogenProperties,
+  saturationTemperatureSlope_K_per_Pa,
+  SATURATION_PRESSURE_PA,
+  type CryogenId,
+  type FluidProperties,
+} from "./fluids";
 import { studentTQuantile } from "./student-t";
 import { readSeries, type Series } from "./steady-window";
 
@@ -114,20 +120,46 @@ export interface MeasuredHeatLeakInput {
   cryogen: CryogenId;
   capacity_L?: number;
   ventReference?: VentReference;
-  /** Mean barometric pressure during the window; reported, not corrected for (see below). */
+  /** Mean barometric pressure during the window (the saturation-temperature shift is reported). */
   barometricPressure_Pa?: number;
+  /** Least-squares slope of the barometer over the same window and its standard error. */
+  pressureTrend?: { slope_Pa_per_s: number; stdError_Pa_per_s: number };
+  /** Liquid in the vessel during the window. */
+  liquidMass_kg?: number;
 }
 
+export type BarometricCorrection =
+  | {
+      applied: true;
+      /** m·c_p·(dT_sat/dp)·(dp/dt): heat the liquid stored (> 0, pressure rising) or released. */
+      correction_W: number;
+      correctionStdError_W: number;
+      pressureSlope_Pa_per_s: number;
+      pressureSlopeStdError_Pa_per_s: number;
+      liquidMass_kg: number;
+      liquidHeatCapacity_J_per_kg_K: number;
+      saturationTemperatureSlope_K_per_Pa: number;
+    }
+  | { applied: false; reason: string };
+
 export interface MeasuredHeatLeakResult {
+  /** The heat leak: the vented heat plus the barometric correction when it is applied. */
   measuredHeatLeak_W: number;
   measuredHeatLeakStdError_W: number;
+  /** What the boil-off rate alone gives (the heat leak before the barometric correction). */
+  ventedHeatLeak_W: number;
+  ventedHeatLeakStdError_W: number;
   evaporationRate_percent_per_day?: number;
   barometricPressure_Pa?: number;
   /** Shift of the bath's saturation temperature from its 1 atm value at that pressure. */
   saturationTemperatureShift_K?: number;
-  barometricCorrectionApplied: false;
+  barometricCorrectionApplied: boolean;
+  barometricCorrection: BarometricCorrection;
   warnings: string[];
 }
+
+/** A barometer moving faster than this is more than weather: a sensor fault or a vessel pressure. */
+const FAST_PRESSURE_TREND_PA_PER_S = 1000 / 3600;
 
 /**
  * Measured heat leak from a fitted rate. Each method's rate becomes a heat through the same
@@ -136,10 +168,14 @@ export interface MeasuredHeatLeakResult {
  * the ideal gas; a level gauge gives liquid volume, Q = V̇·ρ_l·h_fg. The conversion is linear, so
  * the standard error scales by the same factor.
  *
- * Barometric pressure: a drifting barometer makes the bath store or release sensible heat as its
- * saturation temperature follows (dT/dp from the Clapeyron equation). Correcting for it needs the
- * liquid's heat capacity and the pressure's trend, which this engine does not hold, so we report
- * the mean pressure and the resulting saturation-temperature shift and leave the heat uncorrected.
+ * Barometric correction (common practice in boil-off testing): while the barometer drifts, the
+ * bath's saturation temperature follows it, so the liquid stores (pressure rising) or releases
+ * (falling) sensible heat that the vent never sees:
+ *   Q = Q_vented + m·c_p·(dT_sat/dp)·(dp/dt),
+ * dT_sat/dp from the Clapeyron equation at 1 atm, c_p of the saturated liquid at 1 atm. Its
+ * standard error adds in quadrature, first order, from the pressure slope's alone (m, c_p and
+ * the slope of the saturation curve are taken as exact). Without the trend or the liquid mass the
+ * heat stays uncorrected and the result says why.
  */
 export function measuredHeatLeak(input: MeasuredHeatLeakInput): MeasuredHeatLeakResult {
   const rate = requireFinite("rate", input.rate);
@@ -181,13 +217,25 @@ export function measuredHeatLeak(input: MeasuredHeatLeakInput): MeasuredHeatLeak
     );
   }
 
-  const measuredHeatLeak_W = heatPerUnit * boilOffSignal;
+  const vented_W = heatPerUnit * boilOffSignal;
+  const ventedStdError_W = heatPerUnit * rateStdError;
+  const correction = barometricCorrection(fluid, input.pressureTrend, input.liquidMass_kg);
+  const measuredHeatLeak_W = correction.applied ? vented_W + correction.correction_W : vented_W;
   const result: MeasuredHeatLeakResult = {
     measuredHeatLeak_W,
-    measuredHeatLeakStdError_W: heatPerUnit * rateStdError,
-    barometricCorrectionApplied: false,
+    measuredHeatLeakStdError_W: correction.applied ? Math.hypot(ventedStdError_W, correction.correctionStdError_W) : ventedStdError_W,
+    ventedHeatLeak_W: vented_W,
+    ventedHeatLeakStdError_W: ventedStdError_W,
+    barometricCorrectionApplied: correction.applied,
+    barometricCorrection: correction,
     warnings,
   };
+  if (correction.applied && Math.abs(correction.pressureSlope_Pa_per_s) > FAST_PRESSURE_TREND_PA_PER_S) {
+    warnings.push(
+      `the barometer moves ${((correction.pressureSlope_Pa_per_s * 3600) / 1000).toFixed(2)} kPa/h, faster than weather does: ` +
+        "check the pressure column's unit and sensor",
+    );
+  }
   if (capacity_L !== undefined) {
     const liquid_L_per_day =
       (measuredHeatLeak_W / (fluid.latentHeat_J_per_kg * fluid.liquidDensity_kg_per_m3)) * 1000 * 86_400;
@@ -201,12 +249,40 @@ export function measuredHeatLeak(input: MeasuredHeatLeakInput): MeasuredHeatLeak
     if (Math.abs(pressure - SATURATION_PRESSURE_PA) > 2_000) {
       warnings.push(
         `the mean barometric pressure (${(pressure / 1000).toFixed(1)} kPa) is away from 101.325 kPa: ` +
-          `the bath sits ${shift_K.toFixed(3)} K off its normal boiling point; properties are taken at 1 atm ` +
-          "and the heat leak is not corrected",
+          `the bath sits ${shift_K.toFixed(3)} K off its normal boiling point; properties are taken at 1 atm` +
+          (correction.applied ? "" : " and the heat leak is not corrected"),
       );
     }
   }
   return result;
+}
+
+function barometricCorrection(
+  fluid: FluidProperties,
+  trend: MeasuredHeatLeakInput["pressureTrend"],
+  liquidMass_kg: number | undefined,
+): BarometricCorrection {
+  if (trend === undefined) return { applied: false, reason: "no barometer column in the log, so no pressure trend" };
+  if (trend === null || typeof trend !== "object") {
+    throw new ThermalInputError("pressureTrend", trend, "an object with slope_Pa_per_s and stdError_Pa_per_s");
+  }
+  const slope = requireFinite("pressureTrend.slope_Pa_per_s", trend.slope_Pa_per_s);
+  const slopeStdError = requireAtLeast("pressureTrend.stdError_Pa_per_s", trend.stdError_Pa_per_s, 0, "Pa/s");
+  if (liquidMass_kg === undefined) return { applied: false, reason: "the liquid mass in the vessel is unknown" };
+  const mass = requireAbove("liquidMass_kg", liquidMass_kg, 0, "kg");
+  const dTdp = saturationTemperatureSlope_K_per_Pa(fluid);
+  // Heat the liquid takes per pascal of pressure rise, J/Pa.
+  const storage_J_per_Pa = mass * fluid.liquidHeatCapacity_J_per_kg_K * dTdp;
+  return {
+    applied: true,
+    correction_W: storage_J_per_Pa * slope,
+    correctionStdError_W: storage_J_per_Pa * slopeStdError,
+    pressureSlope_Pa_per_s: slope,
+    pressureSlopeStdError_Pa_per_s: slopeStdError,
+    liquidMass_kg: mass,
+    liquidHeatCapacity_J_per_kg_K: fluid.liquidHeatCapacity_J_per_kg_K,
+    saturationTemperatureSlope_K_per_Pa: dTdp,
+  };
 }
 
 /** Ratio of measured to predicted heat leak; the prediction is taken as exact. */

@@ -49,6 +49,9 @@ export const boilOffTests = mysqlTable(
     /** The test's own capacity, else the design's for that stage. */
     capacity_L: double("capacity_l"),
     fullScale_mm: double("full_scale_mm"),
+    /** Weighing: the empty vessel's mass; vent-flow: the share of the capacity filled at the first reading. */
+    tareMass_kg: double("tare_mass_kg"),
+    fillFraction: double("fill_fraction"),
     ambientTemperature_K: double("ambient_temperature_k"),
     ambientPressure_Pa: double("ambient_pressure_pa"),
     notes: text("notes").notNull(),

@@ -4,14 +4,18 @@ import { formatNumber, formatQuantity } from "../../../lib/format-quantity";
 import { useUnitSystem } from "../../../lib/unit-system";
 import { MeasuredCautions } from "./measured-cautions";
 
+const signed = (text: string) => (text.startsWith("-") || text.startsWith("—") ? text : `+${text}`);
+
 /**
  * Measured against predicted: the heat leak with its uncertainty, the revision's prediction,
  * and their ratio with its 95 % interval, flagged when it passes the organization's threshold.
+ * The barometric correction shows with the pressure trend, or the reason it was not applied.
  */
 export function ComparisonPanel({ analysis: a, threshold }: { analysis: Analysis; threshold?: number }) {
   const system = useUnitSystem();
   const heat = (w: number | null) => formatQuantity("heat", w, system);
   const over = a.ratio !== null && threshold !== undefined && a.ratio > threshold;
+  const correction = a.barometricCorrection;
   return (
     <div className="space-y-4">
       <dl aria-label="Measured against predicted" className="grid gap-3 sm:grid-cols-3">
@@ -53,7 +57,25 @@ export function ComparisonPanel({ analysis: a, threshold }: { analysis: Analysis
         {a.barometric ? (
           <>
             <dt className="text-ink-300">Mean barometric pressure ({a.barometric.source === "log" ? "from the log" : "from the test"})</dt>
-            <dd className="font-mono">{formatQuantity("pressure", a.barometric.meanPressure_Pa, system, 5)}; boiling point shift {formatNumber(a.barometric.saturationTemperatureShift_K, 3)} K (not applied)</dd>
+            <dd className="font-mono">{formatQuantity("pressure", a.barometric.meanPressure_Pa, system, 5)}; boiling point shift {formatNumber(a.barometric.saturationTemperatureShift_K, 3)} K</dd>
+          </>
+        ) : null}
+        {a.pressureTrend ? (
+          <>
+            <dt className="text-ink-300">Pressure trend</dt>
+            <dd className="font-mono">{signed(formatQuantity("pressure", a.pressureTrend.slope_Pa_per_s * 3600, system))}/h ± {formatQuantity("pressure", a.pressureTrend.stdError_Pa_per_s * 3600, system)}/h</dd>
+          </>
+        ) : null}
+        {correction ? (
+          <>
+            <dt className="text-ink-300">Barometric correction</dt>
+            {correction.applied ? (
+              <dd className="font-mono">
+                {signed(heat(correction.correction_W))} ± {heat(correction.correctionStdError_W)}, included above; {formatQuantity("mass", correction.liquidMass_kg, system)} of liquid; uncorrected {heat(a.uncorrectedHeatLeak_W ?? null)}
+              </dd>
+            ) : (
+              <dd>Not applied: {correction.reason}</dd>
+            )}
           </>
         ) : null}
       </dl>

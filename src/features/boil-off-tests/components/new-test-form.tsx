@@ -1,22 +1,25 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
-import { CreateTestInputSchema, TEST_METHODS, VENT_REFERENCES, type CreateTestInput, type TestDetail } from "../../../../shared/schemas/boil-off-test";
+import { CreateTestInputSchema, TARE_MASS_RANGE_KG, TEST_METHODS, VENT_REFERENCES, type CreateTestInput, type TestDetail } from "../../../../shared/schemas/boil-off-test";
 import { VENT_REFERENCE_CONDITIONS } from "../../../../shared/thermal/boil-off";
 import { Button } from "../../../components/ui/button";
 import { Callout } from "../../../components/ui/callout";
 import { SelectField, TextAreaField, TextField } from "../../../components/ui/field";
 import { applyServerErrors } from "../../../lib/form-errors";
+import { formatQuantity } from "../../../lib/format-quantity";
+import { useUnitSystem } from "../../../lib/unit-system";
 import { useCreateTest } from "../api/create-test";
 import { useDesignChoices, useDesignRevisions, useRevisionStages } from "../api/get-design-choices";
 import { METHOD_HINTS, METHOD_LABELS } from "../utils/method-text";
 import { QuantityInput } from "./quantity-input";
 
-const FIELDS = ["designId", "revision", "stageIndex", "method", "vesselLabel", "ventReference", "ambientTemperature_K", "ambientPressure_Pa", "notes", "capacity_L", "fullScale_mm"] as const;
+const FIELDS = ["designId", "revision", "stageIndex", "method", "vesselLabel", "ventReference", "ambientTemperature_K", "ambientPressure_Pa", "notes", "capacity_L", "fullScale_mm", "tareMass_kg", "fillFraction"] as const;
 
 /** A new test: which revision's prediction it checks, how it is measured, and on what vessel. */
 export function NewTestForm({ onCreated }: { onCreated: (test: TestDetail) => unknown }) {
   const create = useCreateTest();
+  const system = useUnitSystem();
   const [problem, setProblem] = useState<string | null>(null);
   const form = useForm<CreateTestInput>({
     resolver: zodResolver(CreateTestInputSchema),
@@ -34,7 +37,16 @@ export function NewTestForm({ onCreated }: { onCreated: (test: TestDetail) => un
   const onSubmit = form.handleSubmit(async (values) => {
     setProblem(null);
     try {
-      onCreated(await create.mutateAsync({ ...values, stageIndex: values.stageIndex ?? shownStage, ventReference: values.method === "vent-flow" ? values.ventReference : undefined }));
+      onCreated(
+        await create.mutateAsync({
+          ...values,
+          stageIndex: values.stageIndex ?? shownStage,
+          ventReference: values.method === "vent-flow" ? values.ventReference : undefined,
+          // Each belongs to one method; a value typed before switching method is dropped.
+          tareMass_kg: values.method === "weighing" ? values.tareMass_kg : undefined,
+          fillFraction: values.method === "vent-flow" ? values.fillFraction : undefined,
+        }),
+      );
     } catch (error) {
       setProblem(applyServerErrors(error, setError, FIELDS));
     }
@@ -118,6 +130,24 @@ export function NewTestForm({ onCreated }: { onCreated: (test: TestDetail) => un
           hint={method === "level" ? "Turns the level into litres; left empty, the design's capacity for the stage is used." : "For the evaporation rate; left empty, the design's capacity is used."}
         />
         {method === "level" ? <QuantityInput control={control} name="fullScale_mm" label="Gauge full scale (for a log in mm)" kind={null} suffix="mm" /> : null}
+        {method === "weighing" ? (
+          <QuantityInput
+            control={control}
+            name="tareMass_kg"
+            label="Empty vessel mass (optional)"
+            kind="mass"
+            hint={`Tare, up to ${formatQuantity("mass", TARE_MASS_RANGE_KG.max, system)}. Gives the liquid mass for the barometric correction.`}
+          />
+        ) : null}
+        {method === "vent-flow" ? (
+          <QuantityInput
+            control={control}
+            name="fillFraction"
+            label="Starting fill fraction (optional)"
+            kind={null}
+            hint="Above 0, at most 1, at the first reading. Gives the liquid mass for the barometric correction."
+          />
+        ) : null}
       </div>
       <TextAreaField label="Notes (optional)" error={errors.notes?.message} {...register("notes")} />
       <Button type="submit" busy={isSubmitting}>Create test</Button>

@@ -6,7 +6,7 @@ import { TextField } from "../../../components/ui/field";
 import { inputText, localizeRange, parseInput } from "../../../lib/format-quantity";
 import { useUnitSystem } from "../../../lib/unit-system";
 
-type QuantityName = "ambientTemperature_K" | "ambientPressure_Pa" | "capacity_L" | "fullScale_mm";
+type QuantityName = "ambientTemperature_K" | "ambientPressure_Pa" | "capacity_L" | "fullScale_mm" | "tareMass_kg" | "fillFraction";
 
 /**
  * An optional number typed in the user's unit system while the form keeps SI. What was typed
