@@ -62,8 +62,8 @@ export function designsRouter(ctx: ServiceContext): Router {
 export function estimateRouter(ctx: ServiceContext): Router {
   const router = Router();
   router.post("/estimate", requirePermission("read:design"), async (req, res) => {
-    const { content } = parseInput(EstimateInputSchema, req.body);
-    res.json(await designs.estimate(ctx, actorOf(req), content));
+    const { content, sweep } = parseInput(EstimateInputSchema, req.body);
+    res.json(await designs.estimate(ctx, actorOf(req), content, { sweep }));
   });
   router.get("/compare", requirePermission("read:design"), async (req, res) => {
     const { ids, price_per_L } = parseInput(CompareQuerySchema, req.query, "query");

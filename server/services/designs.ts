@@ -18,18 +18,18 @@ import type { Actor, ServiceContext } from "./context";
 import { resolveDesignMaterials } from "./design-materials";
 
 /** Resolves the design's library versions and runs the engine; bad references are a 400 naming the field. */
-export async function predictContent(db: Tx, organizationId: string, content: DesignContent, keep?: Set<string>) {
+export async function predictContent(db: Tx, organizationId: string, content: DesignContent, keep?: Set<string>, options: { sweep?: boolean } = {}) {
   const { lookup, list } = await resolveDesignMaterials(db, organizationId, content, keep);
   try {
-    return { prediction: predictDesign(content, lookup), materials: list };
+    return { prediction: predictDesign(content, lookup, options), materials: list };
   } catch (error) {
     if (error instanceof MaterialReferenceError) throw invalidInput(error.message, [{ path: error.field, message: error.message }]);
     throw error; // ThermalInputError becomes a 400 in the error handler
   }
 }
 
-export async function estimate(ctx: ServiceContext, actor: Actor, content: DesignContent) {
-  return predictContent(ctx.db, actor.organizationId, content);
+export async function estimate(ctx: ServiceContext, actor: Actor, content: DesignContent, options: { sweep: boolean }) {
+  return predictContent(ctx.db, actor.organizationId, content, undefined, options);
 }
 
 const summaryOf = (row: repo.DesignRow, createdBy: string | null): DesignSummary => ({

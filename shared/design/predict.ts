@@ -9,8 +9,11 @@ import type { MaterialRef } from "../schemas/design";
 const SWEEP_POINTS = 40;
 const SWEEP_MAX_LAYERS = 200;
 
-/** The one function both the saved prediction and the live estimate call. */
-export function predictDesign(content: DesignContent, lookup: (ref: MaterialRef) => ResolvedMaterial | undefined): Prediction {
+/**
+ * The one function both the saved prediction and the live estimate call. The sweep is most of
+ * the cost, so a live edit may ask for the figures first ({ sweep: false } gives sweep null).
+ */
+export function predictDesign(content: DesignContent, lookup: (ref: MaterialRef) => ResolvedMaterial | undefined, options: { sweep?: boolean } = {}): Prediction {
   const assembly = toAssembly(content, lookup);
   const result = estimateAssembly(assembly);
   const cold = result.stages[result.stages.length - 1];
@@ -20,7 +23,7 @@ export function predictDesign(content: DesignContent, lookup: (ref: MaterialRef)
     coldBoilOff_L_per_day: cold.boilOff ? cold.boilOff.liquidVolume_L_per_day : null,
     holdTime_h: cold.boilOff?.holdTime_h != null && Number.isFinite(cold.boilOff.holdTime_h) ? cold.boilOff.holdTime_h : null,
     evaporationRate_percent_per_day: cold.boilOff?.evaporationRate_percent_per_day ?? null,
-    sweep: layerSweep(assembly, content.targetColdHeat_W ?? null),
+    sweep: options.sweep === false ? null : layerSweep(assembly, content.targetColdHeat_W ?? null),
   };
 }
 

@@ -154,7 +154,8 @@ export const SaveRevisionInputSchema = z.object({
 export type SaveRevisionInput = z.infer<typeof SaveRevisionInputSchema>;
 
 export const DuplicateDesignInputSchema = z.object({ name: DesignNameSchema.optional() });
-export const EstimateInputSchema = z.object({ content: DesignContentSchema });
+/** sweep: false leaves the layer-count sweep out (null), for the quick figures of a live edit. */
+export const EstimateInputSchema = z.object({ content: DesignContentSchema, sweep: z.boolean({ error: "sweep must be true or false" }).default(true) });
 export const DesignParamsSchema = z.object({ id: IdSchema });
 export const RevisionParamsSchema = z.object({
   id: IdSchema,

@@ -155,6 +155,14 @@ describe("duplicate, estimate, compare and report", () => {
     expect(res.status).toBe(200);
     expect(res.body.prediction.coldHeat_W).toBeGreaterThan(0);
     expect(res.body.prediction.sweep.points.length).toBeGreaterThan(5);
+    // The quick figures of a live edit: the same heat, no sweep.
+    const figures = await agent.post("/api/estimate").send({ content: await panel(), sweep: false });
+    expect(figures.status).toBe(200);
+    expect(figures.body.prediction.sweep).toBeNull();
+    expect(figures.body.prediction.coldHeat_W).toBe(res.body.prediction.coldHeat_W);
+    const bad = await agent.post("/api/estimate").send({ content: await panel(), sweep: "yes" });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.map((f: { path: string }) => f.path)).toEqual(["sweep"]);
     expect(await countRows(t.ctx.db, "designs")).toBe(0);
   });
 

@@ -9,6 +9,6 @@ export const designKeys = {
   detail: (designId: string) => [...designKeys.all, "detail", designId] as const,
   revision: (designId: string, revision: number) => [...designKeys.detail(designId), "revision", revision] as const,
   /** contentKey is the JSON of a valid DesignContent: equal designs share one estimate. */
-  estimate: (contentKey: string) => [...designKeys.all, "estimate", contentKey] as const,
+  estimate: (contentKey: string, sweep: boolean) => [...designKeys.all, "estimate", sweep ? "with-sweep" : "figures", contentKey] as const,
   libraryPicks: () => [...designKeys.all, "library-picks"] as const,
 };

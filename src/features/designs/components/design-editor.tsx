@@ -43,7 +43,7 @@ export function DesignEditor({ initial, savedPrediction, known, picks, readOnly,
             {below}
           </div>
           <div className="min-w-0 xl:sticky xl:top-4 xl:max-h-[calc(100vh-2rem)] xl:overflow-y-auto">
-            <ResultsPanel prediction={live.prediction} state={live.state} problems={live.problems} />
+            <ResultsPanel prediction={live.prediction} state={live.state} problems={live.problems} sweepUpdating={live.sweepUpdating} />
           </div>
         </div>
       </LibraryProvider>

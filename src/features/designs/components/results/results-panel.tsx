@@ -11,12 +11,16 @@ import { WarningsList } from "./warnings-list";
 /** fresh: the figures are the form's; updating: a newer estimate is on its way; stale: the form has problems. */
 export type ResultsState = "fresh" | "updating" | "stale";
 
-type ResultsPanelProps = { prediction: Prediction | null; state: ResultsState; problems: string[] };
+/** sweepUpdating: the figures are the form's, the layer-count sweep is still the previous one's. */
+type ResultsPanelProps = { prediction: Prediction | null; state: ResultsState; problems: string[]; sweepUpdating?: boolean };
 
-function Section({ title, children }: { title: string; children: React.ReactNode }) {
+function Section({ title, note, children }: { title: string; note?: string; children: React.ReactNode }) {
   return (
     <section className="space-y-3 border-t border-ink-800 pt-4">
-      <h3 className="text-sm font-semibold uppercase tracking-wider text-ink-300">{title}</h3>
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <h3 className="text-sm font-semibold uppercase tracking-wider text-ink-300">{title}</h3>
+        {note ? <p className="text-xs text-ink-300">{note}</p> : null}
+      </div>
       {children}
     </section>
   );
@@ -26,7 +30,7 @@ function Section({ title, children }: { title: string; children: React.ReactNode
  * The live results beside the form. When the form has problems, the last good figures stay,
  * dimmed, under a note that says so in words (never by the dimming alone).
  */
-export function ResultsPanel({ prediction, state, problems }: ResultsPanelProps) {
+export function ResultsPanel({ prediction, state, problems, sweepUpdating = false }: ResultsPanelProps) {
   const result = prediction?.result;
   const swept = prediction?.sweep ? result?.blocks.find((b) => b.layupIndex === prediction.sweep?.layupIndex) : undefined;
   return (
@@ -62,7 +66,7 @@ export function ResultsPanel({ prediction, state, problems }: ResultsPanelProps)
             <ResistanceLadder result={result} />
           </Section>
           {prediction.sweep ? (
-            <Section title="Layer-count sweep">
+            <Section title="Layer-count sweep" note={sweepUpdating ? "Updating the sweep…" : undefined}>
               <LayerCountSweep sweep={prediction.sweep} blockName={swept?.label ?? "the main block"} currentLayers={swept?.layers ?? null} />
             </Section>
           ) : null}
