@@ -128,6 +128,12 @@ test("the engineer designs a two-stage helium cryostat, saves it, compares it an
   await page.getByLabel("Price per litre of cryogen (your currency)").fill("5");
   await expect(table.getByRole("row", { name: /Yearly cryogen cost/ })).not.toContainText("set a price");
 
+  // Overview lists it among the recent designs, with its heat into the cold vessel.
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Overview" }).click();
+  await expect(page.getByRole("heading", { name: "Recent designs" })).toBeVisible();
+  const recent = page.getByRole("listitem").filter({ has: page.getByRole("link", { name }) });
+  await expect(recent).toContainText(/W into the cold vessel/);
+
   expect(errors).toEqual([]);
   for (const refusal of refusals) expect(refusal).toMatch(/^POST \/api\/estimate 400 .*cold\.temperature_K must be a temperature below/);
 });
