@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { AssemblyDesign } from "./assembly-design";
 import { estimateAssembly, validateAssembly } from "./assembly";
-import { ThermalInputError } from "./errors";
+import { thrownInputError } from "./checks.test-helpers";
 
 // A valid two-segment design; each case below breaks one field of it.
 function design(): AssemblyDesign {
@@ -17,16 +17,6 @@ function design(): AssemblyDesign {
     supports: [{ material: "g10-normal", area_m2: 1e-4, length_m: 0.1, count: 4, from: "warm", to: 0 }],
     vacuum: { pressure_Pa: 1e-4, gas: "helium" },
   };
-}
-
-function thrown(run: () => unknown): ThermalInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(ThermalInputError);
-    return error as ThermalInputError;
-  }
-  throw new Error("expected a ThermalInputError");
 }
 
 // Each case: what to break, the field path the error must name, and words of the allowed range.
@@ -63,14 +53,14 @@ describe("estimateAssembly input checks", () => {
   it.each(cases)("refuses %s, naming the field and the range", (_name, breakIt, field, words) => {
     const d = design();
     breakIt(d);
-    const error = thrown(() => estimateAssembly(d));
+    const error = thrownInputError(() => estimateAssembly(d));
     expect(error.field).toBe(field);
     expect(error.allowed).toContain(words);
     expect(error.message.startsWith(`${field} must be `)).toBe(true);
   });
 
   it("refuses something that is not a design", () => {
-    expect(thrown(() => estimateAssembly(null as unknown as AssemblyDesign)).field).toBe("design");
-    expect(thrown(() => estimateAssembly({ ...design(), layup: "none" } as unknown as AssemblyDesign)).field).toBe("layup");
+    expect(thrownInputError(() => estimateAssembly(null as unknown as AssemblyDesign)).field).toBe("design");
+    expect(thrownInputError(() => estimateAssembly({ ...design(), layup: "none" } as unknown as AssemblyDesign)).field).toBe("layup");
   });
 });

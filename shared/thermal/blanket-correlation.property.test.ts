@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, it } from "vitest";
 import { blanketCorrelation, CORRELATION_SETS } from "./blanket-correlation";
+import { nearlyEqualAboveTiny } from "./checks.test-helpers";
 
 const input = fc.record({
   layers: fc.integer({ min: 1, max: 200 }),
@@ -12,10 +13,6 @@ const input = fc.record({
   set: fc.constantFrom(...CORRELATION_SETS),
 });
 
-function close(a: number, b: number, relative = 1e-12): boolean {
-  return Math.abs(a - b) <= relative * Math.max(Math.abs(a), Math.abs(b), 1e-300);
-}
-
 describe("blanket correlation laws", () => {
   it("the three parts sum to the total and none is negative", () => {
     fc.assert(
@@ -26,7 +23,7 @@ describe("blanket correlation laws", () => {
           coefficients: i.set.coefficients,
         });
         return (
-          close(q.heatFlux_W_per_m2, q.solid_W_per_m2 + q.radiation_W_per_m2 + q.gas_W_per_m2) &&
+          nearlyEqualAboveTiny(q.heatFlux_W_per_m2, q.solid_W_per_m2 + q.radiation_W_per_m2 + q.gas_W_per_m2) &&
           q.solid_W_per_m2 >= 0 &&
           q.radiation_W_per_m2 >= 0 &&
           q.gas_W_per_m2 >= 0
@@ -42,8 +39,8 @@ describe("blanket correlation laws", () => {
         const q = blanketCorrelation(common);
         const lowered = blanketCorrelation({ ...common, emissivity: i.emissivity * k, pressure_torr: i.pressure_torr * k });
         return (
-          close(lowered.radiation_W_per_m2, k * q.radiation_W_per_m2) &&
-          close(lowered.gas_W_per_m2, k * q.gas_W_per_m2) &&
+          nearlyEqualAboveTiny(lowered.radiation_W_per_m2, k * q.radiation_W_per_m2) &&
+          nearlyEqualAboveTiny(lowered.gas_W_per_m2, k * q.gas_W_per_m2) &&
           lowered.solid_W_per_m2 === q.solid_W_per_m2
         );
       }),

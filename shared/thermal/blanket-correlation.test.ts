@@ -5,16 +5,8 @@ import {
   polyesterConductivity_W_per_m_K,
   type BlanketCorrelationInput,
 } from "./blanket-correlation";
+import { thrownUnchecked } from "./checks.test-helpers";
 import { ThermalInputError } from "./errors";
-
-function thrown(fn: () => unknown): ThermalInputError {
-  try {
-    fn();
-  } catch (error) {
-    return error as ThermalInputError;
-  }
-  throw new Error("expected a ThermalInputError");
-}
 
 function set(id: string) {
   const found = CORRELATION_SETS.find((s) => s.id === id);
@@ -117,12 +109,12 @@ describe("blanketCorrelation validation", () => {
     ["coefficients.solid", { coefficients: { ...base.coefficients, solid: Number.NaN } }],
     ["coefficients.solidTemperatureTerm", { coefficients: { ...base.coefficients, solidTemperatureTerm: "x" as never } }],
   ])("refuses a bad %s", (field, override) => {
-    const error = thrown(() => blanketCorrelation({ ...base, ...override }));
+    const error = thrownUnchecked(() => blanketCorrelation({ ...base, ...override }));
     expect(error).toBeInstanceOf(ThermalInputError);
     expect(error.field).toBe(field);
   });
 
   it("refuses missing coefficients", () => {
-    expect(thrown(() => blanketCorrelation({ ...base, coefficients: undefined as never })).field).toBe("coefficients");
+    expect(thrownUnchecked(() => blanketCorrelation({ ...base, coefficients: undefined as never })).field).toBe("coefficients");
   });
 });

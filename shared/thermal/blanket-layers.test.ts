@@ -1,23 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { BlanketLayersInput, estimateLayers } from "./blanket-layers";
+import { fieldOf, relativeError } from "./checks.test-helpers";
 import { Emissivity, emissivityAt } from "./emissivity";
-import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA, ThermalInputError } from "./errors";
+import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA } from "./errors";
 import { gasConduction } from "./gas-conduction";
 import { estimateStack } from "./radiation-network";
-
-function fieldOf(run: () => unknown): string {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(ThermalInputError);
-    return (error as ThermalInputError).field;
-  }
-  throw new Error("expected a ThermalInputError");
-}
-
-function relative(actual: number, expected: number): number {
-  return Math.abs(actual - expected) / Math.abs(expected);
-}
 
 // Hagen–Rubens-like aluminized film, ε = 0.03·(T/300)^0.5 (see emissivity.test.ts for the source).
 const film: Emissivity = { kind: "power", reference: 0.03, referenceTemperature_K: 300, exponent: 0.5 };
@@ -56,8 +43,8 @@ describe("estimateLayers: radiation only", () => {
       cold: input.cold,
       shields: Array.from({ length: layers }, () => ({ ...input.reflector })),
     });
-    expect(relative(layered.heatLeak_W, stacked.heatLeak_W)).toBeLessThan(1e-9);
-    layered.layerTemperatures_K.forEach((t, k) => expect(relative(t, stacked.shields[k].temperature_K)).toBeLessThan(1e-9));
+    expect(relativeError(layered.heatLeak_W, stacked.heatLeak_W)).toBeLessThan(1e-9);
+    layered.layerTemperatures_K.forEach((t, k) => expect(relativeError(t, stacked.shields[k].temperature_K)).toBeLessThan(1e-9));
     expect(layered.radiation_W).toBe(layered.heatLeak_W);
     expect(layered.solid_W).toBe(0);
     expect(layered.gas_W).toBe(0);
@@ -68,7 +55,7 @@ describe("estimateLayers: with spacer conduction", () => {
   it("carries the same heat through every gap", () => {
     const input = blanket(30, { spacer: { conductance_W_per_m2_K: 0.05 } });
     const result = estimateLayers(input);
-    for (const q of gapFluxes(input, result.layerTemperatures_K, 0.05)) expect(relative(q, result.heatFlux_W_per_m2)).toBeLessThan(1e-9);
+    for (const q of gapFluxes(input, result.layerTemperatures_K, 0.05)) expect(relativeError(q, result.heatFlux_W_per_m2)).toBeLessThan(1e-9);
   });
 
   it("tends to conduction through N + 1 equal conductances in series when radiation is negligible", () => {
@@ -81,7 +68,7 @@ describe("estimateLayers: with spacer conduction", () => {
       spacer: { conductance_W_per_m2_K: 0.1 },
     });
     const result = estimateLayers(input);
-    expect(relative(result.heatFlux_W_per_m2, (0.1 * 223) / 11)).toBeLessThan(1e-4);
+    expect(relativeError(result.heatFlux_W_per_m2, (0.1 * 223) / 11)).toBeLessThan(1e-4);
     result.layerTemperatures_K.forEach((t, k) => expect(Math.abs(t - (300 - (223 * (k + 1)) / 11))).toBeLessThan(1e-2));
   });
 
@@ -98,8 +85,8 @@ describe("estimateLayers: with spacer conduction", () => {
     const result = estimateLayers(input);
     const p = 0.0364 / 188.5;
     const span = 300 ** 2 - 20 ** 2;
-    expect(relative(result.heatFlux_W_per_m2, (p / 2) * (span / 11))).toBeLessThan(1e-4);
-    result.layerTemperatures_K.forEach((t, k) => expect(relative(t, Math.sqrt(300 ** 2 - (span * (k + 1)) / 11))).toBeLessThan(1e-4));
+    expect(relativeError(result.heatFlux_W_per_m2, (p / 2) * (span / 11))).toBeLessThan(1e-4);
+    result.layerTemperatures_K.forEach((t, k) => expect(relativeError(t, Math.sqrt(300 ** 2 - (span * (k + 1)) / 11))).toBeLessThan(1e-4));
     // The same conductance held fixed carries more: the cold gaps conduct as if they were warm.
     const fixed = estimateLayers({ ...input, spacer: { conductance_W_per_m2_K: 0.0364 } });
     expect(fixed.heatFlux_W_per_m2).toBeGreaterThan(result.heatFlux_W_per_m2);
@@ -111,14 +98,14 @@ describe("estimateLayers: with spacer conduction", () => {
     const result = estimateLayers(input);
     const t = [300, ...result.layerTemperatures_K, 4.2];
     const fluxes = gapFluxes(input, result.layerTemperatures_K).map((radiation, g) => radiation + (0.05 / 150) * ((t[g] + t[g + 1]) / 2) * (t[g] - t[g + 1]));
-    for (const q of fluxes) expect(relative(q, result.heatFlux_W_per_m2)).toBeLessThan(1e-9);
+    for (const q of fluxes) expect(relativeError(q, result.heatFlux_W_per_m2)).toBeLessThan(1e-9);
   });
 
   it("treats conductivity over thickness times the contact factor as the conductance", () => {
     // 0.02 W/(m·K) over 0.1 mm with 1 % surviving the point contacts: 2 W/(m²·K).
     const modelled = estimateLayers(blanket(8, { spacer: { conductivity_W_per_m_K: 0.02, thickness_m: 1e-4, contactFactor: 0.01 } }));
     const direct = estimateLayers(blanket(8, { spacer: { conductance_W_per_m2_K: 2 } }));
-    expect(relative(modelled.heatLeak_W, direct.heatLeak_W)).toBeLessThan(1e-12);
+    expect(relativeError(modelled.heatLeak_W, direct.heatLeak_W)).toBeLessThan(1e-12);
   });
 
   it("splits the coldest gap's heat into its radiation and solid parts", () => {
@@ -126,9 +113,9 @@ describe("estimateLayers: with spacer conduction", () => {
     const result = estimateLayers(input);
     const last = result.layerTemperatures_K[14];
     const radiation = (SIGMA * (last ** 4 - 4.2 ** 4)) / (1 / emissivityAt(film, last) + 1 / emissivityAt(film, 4.2) - 1);
-    expect(relative(result.radiation_W, radiation * 2.5)).toBeLessThan(1e-9);
-    expect(relative(result.solid_W, 0.02 * (last - 4.2) * 2.5)).toBeLessThan(1e-9);
-    expect(relative(result.radiation_W + result.solid_W + result.gas_W, result.heatLeak_W)).toBeLessThan(1e-15);
+    expect(relativeError(result.radiation_W, radiation * 2.5)).toBeLessThan(1e-9);
+    expect(relativeError(result.solid_W, 0.02 * (last - 4.2) * 2.5)).toBeLessThan(1e-9);
+    expect(relativeError(result.radiation_W + result.solid_W + result.gas_W, result.heatLeak_W)).toBeLessThan(1e-15);
   });
 });
 
@@ -139,8 +126,8 @@ describe("estimateLayers: with residual gas", () => {
     const result = estimateLayers(input);
     const radiation = (SIGMA * (300 ** 4 - 77 ** 4)) / (1 / 0.05 + 1 / 0.05 - 1);
     const gas = gasConduction({ gas: "helium", pressure_Pa: 1e-3, gaugeTemperature_K: 300, warm_K: 300, cold_K: 77, accommodation: { warm: 0.5, cold: 0.5 } }).heatFlux_W_per_m2;
-    expect(relative(result.heatFlux_W_per_m2, radiation + gas)).toBeLessThan(1e-12);
-    expect(relative(result.gas_W, gas * 2.5)).toBeLessThan(1e-12);
+    expect(relativeError(result.heatFlux_W_per_m2, radiation + gas)).toBeLessThan(1e-12);
+    expect(relativeError(result.gas_W, gas * 2.5)).toBeLessThan(1e-12);
   });
 
   it("tends to gas conduction through N + 1 gaps in series when radiation is negligible", () => {
@@ -153,13 +140,13 @@ describe("estimateLayers: with residual gas", () => {
       reflector: { warmSide: 1e-6, coldSide: 1e-6 },
       gas: { gas: "helium", pressure_Pa: 0.01, accommodation: { warm: 0.5, cold: 0.5 } },
     });
-    expect(relative(estimateLayers(input).heatFlux_W_per_m2, 0.2601)).toBeLessThan(1e-3);
+    expect(relativeError(estimateLayers(input).heatFlux_W_per_m2, 0.2601)).toBeLessThan(1e-3);
   });
 
   it("balances the gaps with temperature-dependent default coefficients too", () => {
     const result = estimateLayers(blanket(20, { gas: { gas: "helium", pressure_Pa: 1e-2 } }));
     expect(result.gas_W).toBeGreaterThan(0);
-    expect(relative(result.radiation_W + result.gas_W, result.heatLeak_W)).toBeLessThan(1e-15);
+    expect(relativeError(result.radiation_W + result.gas_W, result.heatLeak_W)).toBeLessThan(1e-15);
     const t = [300, ...result.layerTemperatures_K, 4.2];
     for (let k = 1; k < t.length; k++) expect(t[k]).toBeLessThan(t[k - 1]);
   });

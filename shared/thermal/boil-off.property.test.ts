@@ -1,15 +1,12 @@
 import fc from "fast-check";
 import { describe, it } from "vitest";
 import { boilOff, heatFromLiquidVolume, heatFromStandardVentFlow, heatFromVentedMass } from "./boil-off";
+import { nearlyEqual } from "./checks.test-helpers";
 import { CRYOGEN_IDS } from "./fluids";
 
 const cryogen = fc.constantFrom(...CRYOGEN_IDS);
 const heat = fc.double({ min: 1e-4, max: 1e4, noNaN: true });
 const ventReference = fc.constantFrom("normal-0C" as const, "standard-15C" as const, "standard-20C" as const);
-
-function close(a: number, b: number, relative = 1e-12): boolean {
-  return Math.abs(a - b) <= relative * Math.max(Math.abs(a), Math.abs(b));
-}
 
 describe("boilOff laws", () => {
   it("every output is proportional to the heat", () => {
@@ -18,10 +15,10 @@ describe("boilOff laws", () => {
         const one = boilOff({ heat_W: q, cryogen: id });
         const scaled = boilOff({ heat_W: q * k, cryogen: id });
         return (
-          close(scaled.evaporatedMass_kg_per_h, k * one.evaporatedMass_kg_per_h) &&
-          close(scaled.ventedMass_kg_per_h, k * one.ventedMass_kg_per_h) &&
-          close(scaled.liquidVolume_L_per_day, k * one.liquidVolume_L_per_day) &&
-          close(scaled.ventFlow_standard_L_per_min, k * one.ventFlow_standard_L_per_min)
+          nearlyEqual(scaled.evaporatedMass_kg_per_h, k * one.evaporatedMass_kg_per_h) &&
+          nearlyEqual(scaled.ventedMass_kg_per_h, k * one.ventedMass_kg_per_h) &&
+          nearlyEqual(scaled.liquidVolume_L_per_day, k * one.liquidVolume_L_per_day) &&
+          nearlyEqual(scaled.ventFlow_standard_L_per_min, k * one.ventFlow_standard_L_per_min)
         );
       }),
     );
@@ -47,7 +44,7 @@ describe("boilOff laws", () => {
           cryogen: id,
           ventReference: reference,
         }).heat_W;
-        return close(fromMass, q, 1e-10) && close(fromLevel, q, 1e-10) && close(fromFlow, q, 1e-10);
+        return nearlyEqual(fromMass, q, 1e-10) && nearlyEqual(fromLevel, q, 1e-10) && nearlyEqual(fromFlow, q, 1e-10);
       }),
     );
   });
@@ -64,7 +61,7 @@ describe("boilOff laws", () => {
           fc.pre(Math.abs(a - b) > 1e-6);
           const [minimum, fill] = a < b ? [a, b] : [b, a];
           const r = boilOff({ heat_W: q, cryogen: id, capacity_L: capacity, fillFraction: fill, minimumFraction: minimum });
-          return close(r.holdTime_h! * r.liquidVolume_L_per_h, (fill - minimum) * capacity, 1e-10);
+          return nearlyEqual(r.holdTime_h! * r.liquidVolume_L_per_h, (fill - minimum) * capacity, 1e-10);
         },
       ),
     );

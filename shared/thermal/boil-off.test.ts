@@ -7,17 +7,9 @@ import {
   VENT_REFERENCE_CONDITIONS,
   type VentReference,
 } from "./boil-off";
+import { thrownUnchecked } from "./checks.test-helpers";
 import { ThermalInputError } from "./errors";
 import type { CryogenId } from "./fluids";
-
-function thrown(fn: () => unknown): ThermalInputError {
-  try {
-    fn();
-  } catch (error) {
-    return error as ThermalInputError;
-  }
-  throw new Error("expected a ThermalInputError");
-}
 
 describe("boilOff", () => {
   it("1 W boils about 1.4 L of liquid helium an hour (common practice)", () => {
@@ -86,7 +78,7 @@ describe("boilOff", () => {
     ["cryogen", { cryogen: "krypton" }],
     ["ventReference", { ventReference: "stp" }],
   ])("refuses a bad %s", (field, override) => {
-    const error = thrown(() =>
+    const error = thrownUnchecked(() =>
       boilOff({ heat_W: 1, cryogen: "helium-4", capacity_L: 100, ...(override as object) } as Parameters<typeof boilOff>[0]),
     );
     expect(error).toBeInstanceOf(ThermalInputError);
@@ -113,11 +105,11 @@ describe("inverse conversions", () => {
   });
 
   it("refuse negative flows with the field's name", () => {
-    expect(thrown(() => heatFromVentedMass({ ventedMass_kg_per_s: -1, cryogen: "nitrogen" })).field).toBe("ventedMass_kg_per_s");
-    expect(thrown(() => heatFromLiquidVolume({ liquidVolume_m3_per_s: -1, cryogen: "nitrogen" })).field).toBe(
+    expect(thrownUnchecked(() => heatFromVentedMass({ ventedMass_kg_per_s: -1, cryogen: "nitrogen" })).field).toBe("ventedMass_kg_per_s");
+    expect(thrownUnchecked(() => heatFromLiquidVolume({ liquidVolume_m3_per_s: -1, cryogen: "nitrogen" })).field).toBe(
       "liquidVolume_m3_per_s",
     );
-    expect(thrown(() => heatFromStandardVentFlow({ flow_standard_L_per_min: -1, cryogen: "nitrogen" })).field).toBe(
+    expect(thrownUnchecked(() => heatFromStandardVentFlow({ flow_standard_L_per_min: -1, cryogen: "nitrogen" })).field).toBe(
       "flow_standard_L_per_min",
     );
   });

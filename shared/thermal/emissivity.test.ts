@@ -1,21 +1,11 @@
 import { describe, expect, it } from "vitest";
+import { fieldOf } from "./checks.test-helpers";
 import { Emissivity, emissivityAt, emissivitySlope, isConstantEmissivity, validateEmissivity } from "./emissivity";
-import { ThermalInputError } from "./errors";
 
 // Hagen–Rubens regime: for a metal whose resistivity is proportional to T, ε ∝ T^0.5
 // (R. Siegel & J. R. Howell, Thermal Radiation Heat Transfer, 4th ed., Ch. 4, the Hagen–Rubens
 // relation; from memory). The 0.03 at 300 K is a typical aluminized polyester film (common practice).
 const filmHagenRubens: Emissivity = { kind: "power", reference: 0.03, referenceTemperature_K: 300, exponent: 0.5 };
-
-function fieldOf(run: () => unknown): string {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(ThermalInputError);
-    return (error as ThermalInputError).field;
-  }
-  throw new Error("expected a ThermalInputError");
-}
 
 describe("emissivityAt", () => {
   it("returns a constant emissivity at any temperature", () => {

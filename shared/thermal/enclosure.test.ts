@@ -1,20 +1,7 @@
 import { describe, expect, it } from "vitest";
+import { fieldOf, relativeError } from "./checks.test-helpers";
 import { EnclosureInput, checkViewFactors, solveEnclosure } from "./enclosure";
-import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA, ThermalInputError } from "./errors";
-
-function fieldOf(run: () => unknown): string {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(ThermalInputError);
-    return (error as ThermalInputError).field;
-  }
-  throw new Error("expected a ThermalInputError");
-}
-
-function relative(actual: number, expected: number): number {
-  return Math.abs(actual - expected) / Math.abs(expected);
-}
+import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA } from "./errors";
 
 /**
  * Incropera, DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer, 6th ed.,
@@ -35,8 +22,8 @@ describe("solveEnclosure: two-surface enclosures", () => {
       ],
       viewFactors: [[0, 1], [1, 0]],
     });
-    expect(relative(surfaces[0].netHeat_W, twoSurface(800, 0.2, 1, 500, 0.7, 1, 1))).toBeLessThan(1e-12);
-    expect(relative(surfaces[0].netHeat_W, 3625)).toBeLessThan(1e-3);
+    expect(relativeError(surfaces[0].netHeat_W, twoSurface(800, 0.2, 1, 500, 0.7, 1, 1))).toBeLessThan(1e-12);
+    expect(relativeError(surfaces[0].netHeat_W, 3625)).toBeLessThan(1e-3);
     expect(surfaces[1].netHeat_W).toBeCloseTo(-surfaces[0].netHeat_W, 9);
   });
 
@@ -53,7 +40,7 @@ describe("solveEnclosure: two-surface enclosures", () => {
       ],
       viewFactors: [[0, 1], [0.4, 0.6]],
     });
-    expect(relative(surfaces[1].netHeat_W, twoSurface(300, 0.05, a2, 77, 0.02, a1, 0.4))).toBeLessThan(1e-12);
+    expect(relativeError(surfaces[1].netHeat_W, twoSurface(300, 0.05, a2, 77, 0.02, a1, 0.4))).toBeLessThan(1e-12);
     expect(surfaces[0].netHeat_W).toBeCloseTo(-0.49884, 5);
   });
 
@@ -71,7 +58,7 @@ describe("solveEnclosure: two-surface enclosures", () => {
     });
     // Table 13.3 of Incropera et al., 6th ed.: q = σA1(T2⁴ − T1⁴)/(1/ε1 + (1 − ε2)/ε2·(r1/r2)²).
     const tableForm = (SIGMA * a1 * (300 ** 4 - 77 ** 4)) / (1 / 0.04 + ((1 - 0.06) / 0.06) * f21);
-    expect(relative(-surfaces[0].netHeat_W, tableForm)).toBeLessThan(1e-12);
+    expect(relativeError(-surfaces[0].netHeat_W, tableForm)).toBeLessThan(1e-12);
   });
 
   it("black surfaces exchange σ(T1⁴ − T2⁴)A with radiosity equal to the emissive power", () => {
@@ -82,8 +69,8 @@ describe("solveEnclosure: two-surface enclosures", () => {
       ],
       viewFactors: [[0, 1], [1, 0]],
     });
-    expect(relative(surfaces[0].netHeat_W, 2 * SIGMA * (300 ** 4 - 77 ** 4))).toBeLessThan(1e-12);
-    expect(relative(surfaces[0].radiosity_W_per_m2, SIGMA * 300 ** 4)).toBeLessThan(1e-14);
+    expect(relativeError(surfaces[0].netHeat_W, 2 * SIGMA * (300 ** 4 - 77 ** 4))).toBeLessThan(1e-12);
+    expect(relativeError(surfaces[0].radiosity_W_per_m2, SIGMA * 300 ** 4)).toBeLessThan(1e-14);
   });
 });
 
@@ -114,8 +101,8 @@ describe("solveEnclosure: three surfaces, one re-radiating", () => {
   it("matches the closed form of the re-radiating network", () => {
     const { surfaces } = solveEnclosure(oven(0.8));
     const closed = reradiating(1200, 0.8, 1, 500, 0.4, 1, 0.5, 0.5, 0.5);
-    expect(relative(surfaces[0].netHeat_W, closed)).toBeLessThan(1e-12);
-    expect(relative(surfaces[0].netHeat_W, 37000)).toBeLessThan(0.01);
+    expect(relativeError(surfaces[0].netHeat_W, closed)).toBeLessThan(1e-12);
+    expect(relativeError(surfaces[0].netHeat_W, 37000)).toBeLessThan(0.01);
     expect(surfaces[2].netHeat_W).toBe(0);
   });
 
@@ -126,16 +113,16 @@ describe("solveEnclosure: three surfaces, one re-radiating", () => {
     const q = surfaces[0].netHeat_W;
     const j1 = SIGMA * 1200 ** 4 - (q * 0.2) / 0.8;
     const j2 = SIGMA * 500 ** 4 + (q * 0.6) / 0.4;
-    expect(relative(surfaces[2].temperature_K, ((j1 + j2) / 2 / SIGMA) ** 0.25)).toBeLessThan(1e-12);
-    expect(relative(surfaces[0].radiosity_W_per_m2, j1)).toBeLessThan(1e-12);
+    expect(relativeError(surfaces[2].temperature_K, ((j1 + j2) / 2 / SIGMA) ** 0.25)).toBeLessThan(1e-12);
+    expect(relativeError(surfaces[0].radiosity_W_per_m2, j1)).toBeLessThan(1e-12);
   });
 
   it("does not depend on the re-radiating wall's emissivity", () => {
     const a = solveEnclosure(oven(0.8)).surfaces;
     const b = solveEnclosure(oven(0.05)).surfaces;
     for (let i = 0; i < 3; i++) {
-      expect(relative(b[i].temperature_K, a[i].temperature_K)).toBeLessThan(1e-12);
-      if (i < 2) expect(relative(b[i].netHeat_W, a[i].netHeat_W)).toBeLessThan(1e-12);
+      expect(relativeError(b[i].temperature_K, a[i].temperature_K)).toBeLessThan(1e-12);
+      if (i < 2) expect(relativeError(b[i].netHeat_W, a[i].netHeat_W)).toBeLessThan(1e-12);
     }
   });
 
@@ -155,7 +142,7 @@ describe("solveEnclosure: three surfaces, one re-radiating", () => {
       ],
       viewFactors: [[0, f12, f1r], [f12, 0, f1r], [fr1, fr1, 1 - 2 * fr1]],
     });
-    expect(relative(surfaces[0].netHeat_W, reradiating(900, 0.6, 1, 400, 0.3, 1, f12, f1r, f1r))).toBeLessThan(1e-12);
+    expect(relativeError(surfaces[0].netHeat_W, reradiating(900, 0.6, 1, 400, 0.3, 1, f12, f1r, f1r))).toBeLessThan(1e-12);
   });
 });
 

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { relativeError, thrownUnchecked } from "./checks.test-helpers";
 import { ThermalInputError } from "./errors";
 import {
   CRYOGEN_IDS,
@@ -8,19 +9,6 @@ import {
   ventedGasFactor,
   type CryogenId,
 } from "./fluids";
-
-function thrown(fn: () => unknown): ThermalInputError {
-  try {
-    fn();
-  } catch (error) {
-    return error as ThermalInputError;
-  }
-  throw new Error("expected a ThermalInputError");
-}
-
-function relativeError(actual: number, expected: number): number {
-  return Math.abs(actual - expected) / Math.abs(expected);
-}
 
 describe("CRYOGENS table", () => {
   it("has all eight cryogens, each with a named source and a vapour lighter than its liquid", () => {
@@ -97,7 +85,7 @@ describe("saturationTemperatureSlope_K_per_Pa (Clapeyron)", () => {
 
 describe("cryogenProperties", () => {
   it("throws ThermalInputError naming the field for an unknown cryogen", () => {
-    const error = thrown(() => cryogenProperties("xenon" as CryogenId, "stages[1].cryogen"));
+    const error = thrownUnchecked(() => cryogenProperties("xenon" as CryogenId, "stages[1].cryogen"));
     expect(error).toBeInstanceOf(ThermalInputError);
     expect(error.field).toBe("stages[1].cryogen");
     expect(error.allowed).toContain("helium-4");

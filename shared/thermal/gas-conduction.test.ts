@@ -1,16 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { ThermalInputError } from "./errors";
+import { fieldOf } from "./checks.test-helpers";
 import { GasConductionInput, freeMolecularParameter, gasConduction, meanFreePath, overallAccommodation } from "./gas-conduction";
-
-function fieldOf(run: () => unknown): string {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(ThermalInputError);
-    return (error as ThermalInputError).field;
-  }
-  throw new Error("expected a ThermalInputError");
-}
 
 describe("freeMolecularParameter", () => {
   it("matches the published G for helium and nitrogen with the gauge at 300 K", () => {

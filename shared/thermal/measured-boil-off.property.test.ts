@@ -1,12 +1,9 @@
 import fc from "fast-check";
 import { describe, it } from "vitest";
+import { nearlyEqual } from "./checks.test-helpers";
 import { CRYOGEN_IDS } from "./fluids";
 import { fitRate, measuredHeatLeak, suggestSteadyWindow } from "./measured-boil-off";
 import { studentTQuantile } from "./student-t";
-
-function close(a: number, b: number, relative: number, absolute = 0): boolean {
-  return Math.abs(a - b) <= relative * Math.max(Math.abs(a), Math.abs(b)) + absolute;
-}
 
 /** Strictly increasing times: cumulative sums of positive steps. */
 const times = fc
@@ -25,7 +22,7 @@ describe("least-squares rate laws", () => {
         const scale = Math.abs(offset) + Math.abs(slope) * t.at(-1)!;
         // Rounding in the values (about ε·scale) limits the slope to about ε·scale / span.
         const span = t.at(-1)! - t[0];
-        return close(fit.rate, slope, 1e-8, (1e-10 * scale) / span) && close(fit.intercept, offset, 1e-8, 1e-9 * scale) && fit.residualStdDev <= 1e-9 * scale;
+        return nearlyEqual(fit.rate, slope, 1e-8, (1e-10 * scale) / span) && nearlyEqual(fit.intercept, offset, 1e-8, 1e-9 * scale) && fit.residualStdDev <= 1e-9 * scale;
       }),
     );
   });
@@ -40,7 +37,7 @@ describe("least-squares rate laws", () => {
           const y = t.map((x, i) => 2 - 0.01 * x + noise[i]);
           const a = fitRate(t, y, whole);
           const b = fitRate(t, y.map((v) => k * v), whole);
-          return close(b.rate, k * a.rate, 1e-9, 1e-12) && close(b.rateStdError, Math.abs(k) * a.rateStdError, 1e-9, 1e-12);
+          return nearlyEqual(b.rate, k * a.rate, 1e-9, 1e-12) && nearlyEqual(b.rateStdError, Math.abs(k) * a.rateStdError, 1e-9, 1e-12);
         },
       ),
     );
@@ -51,7 +48,7 @@ describe("least-squares rate laws", () => {
       fc.property(times, fc.array(fc.double({ min: -1, max: 1, noNaN: true }), { minLength: 80, maxLength: 80 }), (t, noise) => {
         const fit = fitRate(t, t.map((x, i) => 5 + 0.3 * x + noise[i]), whole);
         const half = studentTQuantile(0.975, t.length - 2) * fit.rateStdError;
-        return close(fit.interval95[0], fit.rate - half, 1e-12, 1e-15) && close(fit.interval95[1], fit.rate + half, 1e-12, 1e-15);
+        return nearlyEqual(fit.interval95[0], fit.rate - half, 1e-12, 1e-15) && nearlyEqual(fit.interval95[1], fit.rate + half, 1e-12, 1e-15);
       }),
     );
   });
@@ -80,8 +77,8 @@ describe("measured heat leak laws", () => {
           const a = measuredHeatLeak({ ...base, rate, rateStdError: magnitude / 10 });
           const b = measuredHeatLeak({ ...base, rate: k * rate, rateStdError: (k * magnitude) / 10 });
           return (
-            close(b.measuredHeatLeak_W, k * a.measuredHeatLeak_W, 1e-12) &&
-            close(b.measuredHeatLeakStdError_W, k * a.measuredHeatLeakStdError_W, 1e-12) &&
+            nearlyEqual(b.measuredHeatLeak_W, k * a.measuredHeatLeak_W, 1e-12) &&
+            nearlyEqual(b.measuredHeatLeakStdError_W, k * a.measuredHeatLeakStdError_W, 1e-12) &&
             a.measuredHeatLeak_W > 0
           );
         },

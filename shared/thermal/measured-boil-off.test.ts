@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { boilOff } from "./boil-off";
+import { thrownUnchecked } from "./checks.test-helpers";
 import { ThermalInputError } from "./errors";
 import { CRYOGEN_IDS } from "./fluids";
 import { compareWithPrediction, fitRate, measuredHeatLeak, suggestSteadyWindow } from "./measured-boil-off";
@@ -29,15 +30,6 @@ function syntheticLog(points: number, step_s: number, shape: (t: number) => numb
   const time_s = Array.from({ length: points }, (_, i) => i * step_s);
   const value = time_s.map((t) => shape(t) + noise * gauss());
   return { time_s, value };
-}
-
-function thrown(fn: () => unknown): ThermalInputError {
-  try {
-    fn();
-  } catch (error) {
-    return error as ThermalInputError;
-  }
-  throw new Error("expected a ThermalInputError");
 }
 
 describe("fitRate", () => {
@@ -97,17 +89,17 @@ describe("fitRate", () => {
     const time_s = Array.from({ length: 30 }, (_, i) => i);
     const value = time_s.map((t) => (t < 10 ? 0 : 2 * t));
     expect(fitRate(time_s, value, { start_s: 10, end_s: 29 }).rate).toBeCloseTo(2, 12);
-    const error = thrown(() => fitRate(time_s, value, { start_s: 10, end_s: 18 }));
+    const error = thrownUnchecked(() => fitRate(time_s, value, { start_s: 10, end_s: 18 }));
     expect(error.field).toBe("window");
     expect(error.allowed).toContain("at least 10 points");
   });
 
   it("refuses malformed logs with the offending field", () => {
     const t = Array.from({ length: 12 }, (_, i) => i);
-    expect(thrown(() => fitRate(t, t.slice(1), { start_s: 0, end_s: 11 })).field).toBe("value");
-    expect(thrown(() => fitRate([0, 1, 2, 2, 4, 5, 6, 7, 8, 9, 10, 11], t, { start_s: 0, end_s: 11 })).field).toBe("time_s[3]");
-    expect(thrown(() => fitRate(t, t.map((v) => (v === 5 ? Number.NaN : v)), { start_s: 0, end_s: 11 })).field).toBe("value[5]");
-    expect(thrown(() => fitRate(t, t, { start_s: 5, end_s: 5 })).field).toBe("window.end_s");
+    expect(thrownUnchecked(() => fitRate(t, t.slice(1), { start_s: 0, end_s: 11 })).field).toBe("value");
+    expect(thrownUnchecked(() => fitRate([0, 1, 2, 2, 4, 5, 6, 7, 8, 9, 10, 11], t, { start_s: 0, end_s: 11 })).field).toBe("time_s[3]");
+    expect(thrownUnchecked(() => fitRate(t, t.map((v) => (v === 5 ? Number.NaN : v)), { start_s: 0, end_s: 11 })).field).toBe("value[5]");
+    expect(thrownUnchecked(() => fitRate(t, t, { start_s: 5, end_s: 5 })).field).toBe("window.end_s");
   });
 
   it("accepts Float64Array logs", () => {
@@ -150,10 +142,10 @@ describe("suggestSteadyWindow", () => {
 
   it("refuses a log of fewer than 10 points and bad options", () => {
     const t = Array.from({ length: 9 }, (_, i) => i);
-    expect(thrown(() => suggestSteadyWindow(t, t)).field).toBe("time_s");
+    expect(thrownUnchecked(() => suggestSteadyWindow(t, t)).field).toBe("time_s");
     const long = Array.from({ length: 50 }, (_, i) => i);
-    expect(thrown(() => suggestSteadyWindow(long, long, { windowPoints: 2 })).field).toBe("options.windowPoints");
-    expect(thrown(() => suggestSteadyWindow(long, long, { tolerance: 0 })).field).toBe("options.tolerance");
+    expect(thrownUnchecked(() => suggestSteadyWindow(long, long, { windowPoints: 2 })).field).toBe("options.windowPoints");
+    expect(thrownUnchecked(() => suggestSteadyWindow(long, long, { tolerance: 0 })).field).toBe("options.tolerance");
   });
 });
 
@@ -229,7 +221,7 @@ describe("measuredHeatLeak", () => {
     ["cryogen", { cryogen: "air" }],
   ])("refuses a bad %s", (field, override) => {
     const input = { method: "weighing", rate: -1e-5, rateStdError: 1e-7, cryogen: "nitrogen", capacity_L: 100, ...override };
-    const error = thrown(() => measuredHeatLeak(input as Parameters<typeof measuredHeatLeak>[0]));
+    const error = thrownUnchecked(() => measuredHeatLeak(input as Parameters<typeof measuredHeatLeak>[0]));
     expect(error).toBeInstanceOf(ThermalInputError);
     expect(error.field).toBe(field);
   });
@@ -294,7 +286,7 @@ describe("measuredHeatLeak: barometric correction", () => {
     ["pressureTrend.stdError_Pa_per_s", { pressureTrend: { slope_Pa_per_s: 0, stdError_Pa_per_s: -1 } }],
   ])("refuses a bad %s", (field, override) => {
     const input = { ...base, pressureTrend: rising, liquidMass_kg: 10, ...override };
-    expect(thrown(() => measuredHeatLeak(input as Parameters<typeof measuredHeatLeak>[0])).field).toBe(field);
+    expect(thrownUnchecked(() => measuredHeatLeak(input as Parameters<typeof measuredHeatLeak>[0])).field).toBe(field);
   });
 
   it("is linear in the pressure slope and in the liquid mass (property)", () => {
@@ -327,6 +319,6 @@ describe("compareWithPrediction", () => {
   });
 
   it("refuses a prediction of zero", () => {
-    expect(thrown(() => compareWithPrediction({ measured_W: 1, measuredStdError_W: 0, predicted_W: 0 })).field).toBe("predicted_W");
+    expect(thrownUnchecked(() => compareWithPrediction({ measured_W: 1, measuredStdError_W: 0, predicted_W: 0 })).field).toBe("predicted_W");
   });
 });

@@ -1,21 +1,8 @@
 import { describe, expect, it } from "vitest";
+import { fieldOf, relativeError } from "./checks.test-helpers";
 import { emissivityAt } from "./emissivity";
-import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA, ThermalInputError } from "./errors";
+import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA } from "./errors";
 import { StackInput, estimateStack } from "./radiation-network";
-
-function fieldOf(run: () => unknown): string {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(ThermalInputError);
-    return (error as ThermalInputError).field;
-  }
-  throw new Error("expected a ThermalInputError");
-}
-
-function relative(actual: number, expected: number): number {
-  return Math.abs(actual - expected) / Math.abs(expected);
-}
 
 describe("estimateStack: large parallel plates", () => {
   // Y. A. Çengel & A. J. Ghajar, Heat and Mass Transfer: Fundamentals and Applications, 5th ed.,
@@ -30,8 +17,8 @@ describe("estimateStack: large parallel plates", () => {
   });
 
   it("matches the textbook heat flux without and with one shield", () => {
-    expect(relative(estimateStack(plates([])).heatFlux_W_per_m2, 3625)).toBeLessThan(1e-3);
-    expect(relative(estimateStack(plates([{ warmSide: 0.1, coldSide: 0.1 }])).heatFlux_W_per_m2, 806)).toBeLessThan(1e-3);
+    expect(relativeError(estimateStack(plates([])).heatFlux_W_per_m2, 3625)).toBeLessThan(1e-3);
+    expect(relativeError(estimateStack(plates([{ warmSide: 0.1, coldSide: 0.1 }])).heatFlux_W_per_m2, 806)).toBeLessThan(1e-3);
   });
 
   it("matches the closed form for parallel plates with a shield to rounding", () => {
@@ -39,7 +26,7 @@ describe("estimateStack: large parallel plates", () => {
     // [(1/ε1 + 1/ε2 − 1) + (1/ε3,1 + 1/ε3,2 − 1)]. Derived by hand: 805.6906 W/m².
     const closedForm = (SIGMA * (800 ** 4 - 500 ** 4)) / (1 / 0.2 + 1 / 0.7 - 1 + (1 / 0.1 + 1 / 0.1 - 1));
     const result = estimateStack(plates([{ warmSide: 0.1, coldSide: 0.1 }]));
-    expect(relative(result.heatFlux_W_per_m2, closedForm)).toBeLessThan(1e-12);
+    expect(relativeError(result.heatFlux_W_per_m2, closedForm)).toBeLessThan(1e-12);
     expect(result.heatFlux_W_per_m2).toBeCloseTo(805.6906, 3);
   });
 
@@ -48,14 +35,14 @@ describe("estimateStack: large parallel plates", () => {
     const result = estimateStack(plates([{ warmSide: 0.1, coldSide: 0.1 }]));
     const q = result.heatFlux_W_per_m2;
     const t3 = ((SIGMA * 800 ** 4 - q * (1 / 0.2 + 1 / 0.1 - 1)) / SIGMA) ** 0.25;
-    expect(relative(result.shields[0].temperature_K, t3)).toBeLessThan(1e-12);
+    expect(relativeError(result.shields[0].temperature_K, t3)).toBeLessThan(1e-12);
     expect(result.shields[0].temperature_K).toBeCloseTo(677.49, 2);
   });
 
   it("gives the black-body flux for black plates", () => {
     // Stefan–Boltzmann law between two black parallel plates (Incropera et al., 6th ed., Table 13.3 with ε = 1).
     const result = estimateStack({ ...plates([]), warm: { temperature_K: 800, emissivity: 1 }, cold: { temperature_K: 500, emissivity: 1 } });
-    expect(relative(result.heatFlux_W_per_m2, SIGMA * (800 ** 4 - 500 ** 4))).toBeLessThan(1e-14);
+    expect(relativeError(result.heatFlux_W_per_m2, SIGMA * (800 ** 4 - 500 ** 4))).toBeLessThan(1e-14);
   });
 });
 
@@ -76,7 +63,7 @@ describe("estimateStack: long concentric cylinders", () => {
     const a1 = 2 * Math.PI * 0.01;
     const closedForm = (SIGMA * a1 * (300 ** 4 - 77 ** 4)) / (1 / 0.02 + ((1 - 0.05) / 0.05) * (0.01 / 0.025));
     const result = estimateStack(tubes([]));
-    expect(relative(result.heatLeak_W, closedForm)).toBeLessThan(1e-12);
+    expect(relativeError(result.heatLeak_W, closedForm)).toBeLessThan(1e-12);
     expect(result.heatLeak_W).toBeCloseTo(0.49884, 5);
   });
 
@@ -116,7 +103,7 @@ describe("estimateStack: concentric spheres", () => {
     // Incropera et al., 6th ed., Table 13.3: q = σA1(T2⁴ − T1⁴)/(1/ε1 + (1 − ε2)/ε2·(r1/r2)²).
     const a1 = 4 * Math.PI * 0.25 ** 2;
     const closedForm = (SIGMA * a1 * (300 ** 4 - 77 ** 4)) / (1 / 0.04 + ((1 - 0.06) / 0.06) * (0.25 / 0.3) ** 2);
-    expect(relative(estimateStack(spheres([])).heatLeak_W, closedForm)).toBeLessThan(1e-12);
+    expect(relativeError(estimateStack(spheres([])).heatLeak_W, closedForm)).toBeLessThan(1e-12);
   });
 
   it("matches two sphere-pair closed forms in series with one shield", () => {
@@ -129,10 +116,10 @@ describe("estimateStack: concentric spheres", () => {
     const innerPair = (1 / 0.04 + ((1 - eps) / eps) * (0.25 / r) ** 2) / (4 * Math.PI * 0.25 ** 2);
     const closedForm = (SIGMA * (300 ** 4 - 77 ** 4)) / (outerPair + innerPair);
     const result = estimateStack(spheres([{ warmSide: eps, coldSide: eps, radius_m: r }]));
-    expect(relative(result.heatLeak_W, closedForm)).toBeLessThan(1e-12);
+    expect(relativeError(result.heatLeak_W, closedForm)).toBeLessThan(1e-12);
     // And the shield's σT⁴ is the cold wall's plus q times the inner pair's resistance.
     const ts = ((SIGMA * 77 ** 4 + closedForm * innerPair) / SIGMA) ** 0.25;
-    expect(relative(result.shields[0].temperature_K, ts)).toBeLessThan(1e-12);
+    expect(relativeError(result.shields[0].temperature_K, ts)).toBeLessThan(1e-12);
   });
 });
 
@@ -147,8 +134,8 @@ describe("estimateStack: identical shields", () => {
       shields: Array.from({ length: n }, () => ({ warmSide: 0.05, coldSide: 0.05 })),
     });
     const bare = estimateStack(input(0)).heatLeak_W;
-    expect(relative(estimateStack(input(10)).heatLeak_W, bare / 11)).toBeLessThan(1e-12);
-    expect(relative(estimateStack(input(1000)).heatLeak_W, bare / 1001)).toBeLessThan(1e-10);
+    expect(relativeError(estimateStack(input(10)).heatLeak_W, bare / 11)).toBeLessThan(1e-12);
+    expect(relativeError(estimateStack(input(1000)).heatLeak_W, bare / 1001)).toBeLessThan(1e-10);
   });
 });
 
@@ -212,7 +199,7 @@ describe("estimateStack: emissivity that depends on temperature", () => {
       const upper = g === 0 ? 0.05 : emissivityAt(film, t[g]);
       const lower = emissivityAt(film, t[g + 1]);
       const gapFlux = (SIGMA * (t[g] ** 4 - t[g + 1] ** 4)) / (1 / upper + 1 / lower - 1);
-      expect(relative(gapFlux, result.heatFlux_W_per_m2)).toBeLessThan(1e-9);
+      expect(relativeError(gapFlux, result.heatFlux_W_per_m2)).toBeLessThan(1e-9);
     }
   });
 

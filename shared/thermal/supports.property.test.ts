@@ -1,5 +1,6 @@
 import fc from "fast-check";
 import { describe, it } from "vitest";
+import { nearlyEqualAboveTiny } from "./checks.test-helpers";
 import { conductivityIntegral, SUPPORT_MATERIAL_IDS, SUPPORT_MATERIALS, supportConduction, thermalConductivity } from "./supports";
 
 const material = fc.constantFrom(...SUPPORT_MATERIAL_IDS);
@@ -11,15 +12,11 @@ function temperatures(id: (typeof SUPPORT_MATERIAL_IDS)[number]) {
   return fc.tuple(t, t, t).map((values) => values.sort((a, b) => a - b));
 }
 
-function close(a: number, b: number, relative: number): boolean {
-  return Math.abs(a - b) <= relative * Math.max(Math.abs(a), Math.abs(b), 1e-300);
-}
-
 describe("conduction laws", () => {
   it("the conductivity integral is additive over adjacent intervals", () => {
     fc.assert(
       fc.property(material.chain((id) => fc.tuple(fc.constant(id), temperatures(id))), ([id, [a, b, c]]) =>
-        close(conductivityIntegral(id, a, b) + conductivityIntegral(id, b, c), conductivityIntegral(id, a, c), 1e-8),
+        nearlyEqualAboveTiny(conductivityIntegral(id, a, b) + conductivityIntegral(id, b, c), conductivityIntegral(id, a, c), 1e-8),
       ),
       { numRuns: 60 },
     );
@@ -54,7 +51,7 @@ describe("conduction laws", () => {
           const many = supportConduction({ ...base, area_m2: area, length_m: length, count }).heat_W;
           const wider = supportConduction({ ...base, area_m2: area * k, length_m: length }).heat_W;
           const longer = supportConduction({ ...base, area_m2: area, length_m: length * k }).heat_W;
-          return close(many, count * one, 1e-12) && close(wider, k * one, 1e-12) && close(longer, one / k, 1e-12);
+          return nearlyEqualAboveTiny(many, count * one, 1e-12) && nearlyEqualAboveTiny(wider, k * one, 1e-12) && nearlyEqualAboveTiny(longer, one / k, 1e-12);
         },
       ),
       { numRuns: 60 },

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { relativeError, thrownUnchecked } from "./checks.test-helpers";
 import { ThermalInputError } from "./errors";
 import {
   conductivityIntegral,
@@ -8,19 +9,6 @@ import {
   thermalConductivity,
   type SupportMaterial,
 } from "./supports";
-
-function thrown(fn: () => unknown): ThermalInputError {
-  try {
-    fn();
-  } catch (error) {
-    return error as ThermalInputError;
-  }
-  throw new Error("expected a ThermalInputError");
-}
-
-function relativeError(actual: number, expected: number): number {
-  return Math.abs(actual - expected) / Math.abs(expected);
-}
 
 describe("thermalConductivity at published check points", () => {
   it("304 stainless is about 15 W/(m·K) at 300 K", () => {
@@ -119,10 +107,10 @@ describe("conductivityIntegral", () => {
   });
 
   it("refuses a cold end below 1 K and a warm end below the cold end", () => {
-    expect(thrown(() => conductivityIntegral("g10-normal", 0.5, 300)).field).toBe("cold_K");
-    expect(thrown(() => conductivityIntegral("stainless-304", 0.5, 300)).field).toBe("cold_K");
-    expect(thrown(() => conductivityIntegral("ptfe", 100, 50)).field).toBe("warm_K");
-    expect(thrown(() => conductivityIntegral("ptfe", 4, 450)).field).toBe("warm_K");
+    expect(thrownUnchecked(() => conductivityIntegral("g10-normal", 0.5, 300)).field).toBe("cold_K");
+    expect(thrownUnchecked(() => conductivityIntegral("stainless-304", 0.5, 300)).field).toBe("cold_K");
+    expect(thrownUnchecked(() => conductivityIntegral("ptfe", 100, 50)).field).toBe("warm_K");
+    expect(thrownUnchecked(() => conductivityIntegral("ptfe", 4, 450)).field).toBe("warm_K");
   });
 });
 
@@ -159,7 +147,7 @@ describe("supportConduction", () => {
     ["warm_K", { warm_K: 500 }],
   ])("refuses a bad %s", (field, override) => {
     const input = { material: "ptfe", area_m2: 1e-4, length_m: 0.1, warm_K: 300, cold_K: 77, ...override };
-    const error = thrown(() => supportConduction(input as Parameters<typeof supportConduction>[0]));
+    const error = thrownUnchecked(() => supportConduction(input as Parameters<typeof supportConduction>[0]));
     expect(error).toBeInstanceOf(ThermalInputError);
     expect(error.field).toBe(field);
   });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { AssemblyDesign, LayupBlock } from "./assembly-design";
 import { estimateAssembly } from "./assembly";
-import { ThermalInputError } from "./errors";
+import { expectClose, fieldOf } from "./checks.test-helpers";
 import { fewestLayersForTarget, sweepLayerCount, sweepLayerDensity, sweepPressure, sweepWarmTemperature } from "./sweeps";
 
 // Emissivities: 0.03 for aluminized polyester film, 0.1 for a stainless jacket, 0.05 for a
@@ -30,20 +30,6 @@ const cryostat: AssemblyDesign = {
   vacuum: { pressure_Pa: 1e-4, gas: "helium" },
 };
 
-function close(actual: number, expected: number, relative = 1e-12): void {
-  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(relative * Math.abs(expected));
-}
-
-function fieldOf(run: () => unknown): string {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(ThermalInputError);
-    return (error as ThermalInputError).field;
-  }
-  throw new Error("expected a ThermalInputError");
-}
-
 function withLayers(design: AssemblyDesign, index: number, layers: number): AssemblyDesign {
   const copy = structuredClone(design);
   (copy.layup[index] as LayupBlock).layers = layers;
@@ -57,15 +43,15 @@ describe("sweepLayerCount", () => {
     const expected = [10.802528005385089, 6.083907124984063, 4.234324249024402, 3.2471504300210796, 2.633245790180242];
     const points = sweepLayerCount(plate, { blockIndex: 0, from: 1, to: 5, step: 1 });
     expect(points.map((p) => p.x)).toEqual([1, 2, 3, 4, 5]);
-    points.forEach((p, i) => close(p.coldHeat_W, expected[i]));
+    points.forEach((p, i) => expectClose(p.coldHeat_W, expected[i]));
     expect(points[0].heatIntoStages_W).toEqual([]);
   });
 
   it("every point is what estimateAssembly gives for that count, stage and supports included", () => {
     for (const p of sweepLayerCount(cryostat, { blockIndex: 2, from: 1, to: 29, step: 7 })) {
       const full = estimateAssembly(withLayers(cryostat, 2, p.x));
-      close(p.coldHeat_W, full.stages[1].heatIn.total_W, 1e-11);
-      close(p.heatIntoStages_W[0], full.stages[0].heatIn.total_W, 1e-11);
+      expectClose(p.coldHeat_W, full.stages[1].heatIn.total_W, 1e-11);
+      expectClose(p.heatIntoStages_W[0], full.stages[0].heatIn.total_W, 1e-11);
     }
   });
 
@@ -99,7 +85,7 @@ describe("fewestLayersForTarget", () => {
     // 0.099994 W and N = 138 gives 0.100717 W, evaluated in Python.
     const result = fewestLayersForTarget(plate, { blockIndex: 0, targetColdHeat_W: 0.1, max: 1000 });
     expect(result.layers).toBe(139);
-    close(result.heat_W, 0.09999424611398731);
+    expectClose(result.heat_W, 0.09999424611398731);
   });
 
   it("is the least count a brute-force scan finds, for several targets", () => {
@@ -113,7 +99,7 @@ describe("fewestLayersForTarget", () => {
   it("gives null and the heat at max when max layers are not enough, and 1 when one is", () => {
     const out = fewestLayersForTarget(plate, { blockIndex: 0, targetColdHeat_W: 1e-3, max: 50 });
     expect(out.layers).toBeNull();
-    close(out.heat_W, sweepLayerCount(plate, { blockIndex: 0, from: 50, to: 50, step: 1 })[0].coldHeat_W);
+    expectClose(out.heat_W, sweepLayerCount(plate, { blockIndex: 0, from: 50, to: 50, step: 1 })[0].coldHeat_W);
     expect(fewestLayersForTarget(plate, { blockIndex: 0, targetColdHeat_W: 20, max: 50 }).layers).toBe(1);
   });
 
@@ -129,17 +115,17 @@ describe("sweepPressure, sweepLayerDensity, sweepWarmTemperature", () => {
   it("spaces pressures evenly in log10 and adds the correlation's linear gas term", () => {
     const points = sweepPressure(blanket, { from: 1e-5, to: 1e-1, pointsPerDecade: 2 });
     expect(points).toHaveLength(9);
-    close(points[2].x, 1e-4, 1e-14);
-    close(points[8].x, 1e-1, 1e-14);
+    expectClose(points[2].x, 1e-4, 1e-14);
+    expectClose(points[8].x, 1e-1, 1e-14);
     // Hand check of the gas term C_g·P·(T_h^0.52 − T_c^0.52)/N (Keller, Cunnington & Glassford, NASA
     // CR-134477, 1974) between 1e-5 and 1e-1 Pa, P in torr = Pa·760/101 325, 30 layers, 1 m², in Python.
-    close(points[8].coldHeat_W - points[0].coldHeat_W, 3.5922921589915773, 1e-9);
+    expectClose(points[8].coldHeat_W - points[0].coldHeat_W, 3.5922921589915773, 1e-9);
   });
 
   it("raises only the solid term with the layer density", () => {
     const points = sweepLayerDensity(blanket, { blockIndex: 0, from: 20, to: 40, step: 20 });
     // Hand check of C_s·N̄^2.63·T_m·ΔT/(N + 1) (NASA CR-134477, 1974) between 20 and 40 layers/cm, in Python.
-    close(points[1].coldHeat_W - points[0].coldHeat_W, 1.3566736318261865, 1e-9);
+    expectClose(points[1].coldHeat_W - points[0].coldHeat_W, 1.3566736318261865, 1e-9);
     expect(fieldOf(() => sweepLayerDensity(plate, { blockIndex: 0, from: 10, to: 20, step: 5 }))).toBe("blockIndex");
   });
 
@@ -153,7 +139,7 @@ describe("sweepPressure, sweepLayerDensity, sweepWarmTemperature", () => {
     const points = sweepWarmTemperature(design, { from: 250, to: 320, step: 10 });
     expect(points).toHaveLength(8);
     // Hand check of the gray-plate formula at 250 K (Incropera et al., 6th ed., Sec. 13.3), in Python.
-    close(points[0].heatIntoStages_W[0], 0.1635254718384576, 1e-12);
+    expectClose(points[0].heatIntoStages_W[0], 0.1635254718384576, 1e-12);
     for (const p of points) expect(p.coldHeat_W).toBe(points[0].coldHeat_W);
     expect(fieldOf(() => sweepWarmTemperature(design, { from: 70, to: 300, step: 10 }))).toBe("from");
     expect(fieldOf(() => sweepWarmTemperature(cryostat, { from: 300, to: 450, step: 10 }))).toBe("to");

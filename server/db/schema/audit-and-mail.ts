@@ -1,19 +1,18 @@
-import { bigint, datetime, index, int, json, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
+import { bigint, index, int, json, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
+import { datetimeMs, organizationId, rowId } from "./columns";
 import { organizations } from "./organizations";
 
 export const auditLog = mysqlTable(
   "audit_log",
   {
     id: bigint("id", { mode: "number", unsigned: true }).autoincrement().primaryKey(),
-    organizationId: varchar("organization_id", { length: 32 })
-      .notNull()
-      .references(() => organizations.id, { onDelete: "cascade" }),
+    organizationId: organizationId(),
     actorUserId: varchar("actor_user_id", { length: 32 }),
     action: varchar("action", { length: 64 }).notNull(),
     entityType: varchar("entity_type", { length: 32 }).notNull(),
     entityId: varchar("entity_id", { length: 64 }).notNull(),
     detail: json("detail").$type<Record<string, unknown>>(),
-    createdAt: datetime("created_at", { mode: "date", fsp: 3 }).notNull(),
+    createdAt: datetimeMs("created_at").notNull(),
   },
   (t) => [index("audit_org_idx").on(t.organizationId, t.createdAt)],
 );
@@ -23,7 +22,7 @@ export const auditLog = mysqlTable(
 export const emailOutbox = mysqlTable(
   "email_outbox",
   {
-    id: varchar("id", { length: 32 }).primaryKey(),
+    id: rowId(),
     organizationId: varchar("organization_id", { length: 32 }).references(() => organizations.id, { onDelete: "cascade" }),
     toAddress: varchar("to_address", { length: 254 }).notNull(),
     subject: varchar("subject", { length: 200 }).notNull(),
@@ -31,9 +30,9 @@ export const emailOutbox = mysqlTable(
     status: mysqlEnum("status", ["pending", "sent", "failed"]).notNull().default("pending"),
     attempts: int("attempts").notNull().default(0),
     lastError: varchar("last_error", { length: 500 }),
-    nextAttemptAt: datetime("next_attempt_at", { mode: "date", fsp: 3 }).notNull(),
-    createdAt: datetime("created_at", { mode: "date", fsp: 3 }).notNull(),
-    sentAt: datetime("sent_at", { mode: "date", fsp: 3 }),
+    nextAttemptAt: datetimeMs("next_attempt_at").notNull(),
+    createdAt: datetimeMs("created_at").notNull(),
+    sentAt: datetimeMs("sent_at"),
   },
   (t) => [index("outbox_due_idx").on(t.status, t.nextAttemptAt), index("outbox_org_idx").on(t.organizationId)],
 );

@@ -1,10 +1,9 @@
-import { bigint, boolean, char, datetime, double, index, int, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
+import { bigint, boolean, char, double, index, int, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
 import type { Analysis, LogUploadFields, Series, TimeFormat } from "../../../shared/schemas/boil-off-test";
 import { TEST_METHODS, TEST_STATUSES, VENT_REFERENCES } from "../../../shared/schemas/boil-off-test";
+import { datetimeMs, organizationId, rowId, userReference } from "./columns";
 import { designs } from "./designs";
 import { jsonText } from "./json-text";
-import { organizations } from "./organizations";
-import { users } from "./users";
 
 /** What the test row remembers of its current log: the mapping used and the parsed series object. */
 export interface StoredLog extends Omit<LogUploadFields, "timeFormat"> {
@@ -29,10 +28,8 @@ export interface StoredLog extends Omit<LogUploadFields, "timeFormat"> {
 export const boilOffTests = mysqlTable(
   "boil_off_tests",
   {
-    id: varchar("id", { length: 32 }).primaryKey(),
-    organizationId: varchar("organization_id", { length: 32 })
-      .notNull()
-      .references(() => organizations.id, { onDelete: "cascade" }),
+    id: rowId(),
+    organizationId: organizationId(),
     designId: varchar("design_id", { length: 32 })
       .notNull()
       .references(() => designs.id, { onDelete: "cascade" }),
@@ -64,12 +61,12 @@ export const boilOffTests = mysqlTable(
     chart: jsonText<Series>("chart"),
     measuredHeatLeak_W: double("measured_heat_leak_w"),
     ratio: double("ratio"),
-    testedAt: datetime("tested_at", { mode: "date", fsp: 3 }).notNull(),
-    acceptedAt: datetime("accepted_at", { mode: "date", fsp: 3 }),
-    acceptedByUserId: varchar("accepted_by_user_id", { length: 32 }).references(() => users.id, { onDelete: "set null" }),
-    createdByUserId: varchar("created_by_user_id", { length: 32 }).references(() => users.id, { onDelete: "set null" }),
-    createdAt: datetime("created_at", { mode: "date", fsp: 3 }).notNull(),
-    updatedAt: datetime("updated_at", { mode: "date", fsp: 3 }).notNull(),
+    testedAt: datetimeMs("tested_at").notNull(),
+    acceptedAt: datetimeMs("accepted_at"),
+    acceptedByUserId: userReference("accepted_by_user_id"),
+    createdByUserId: userReference("created_by_user_id"),
+    createdAt: datetimeMs("created_at").notNull(),
+    updatedAt: datetimeMs("updated_at").notNull(),
   },
   (t) => [index("boil_off_tests_org_idx").on(t.organizationId, t.testedAt), index("boil_off_tests_design_idx").on(t.organizationId, t.designId)],
 );
@@ -78,10 +75,8 @@ export const boilOffTests = mysqlTable(
 export const boilOffTestFiles = mysqlTable(
   "boil_off_test_files",
   {
-    id: varchar("id", { length: 32 }).primaryKey(),
-    organizationId: varchar("organization_id", { length: 32 })
-      .notNull()
-      .references(() => organizations.id, { onDelete: "cascade" }),
+    id: rowId(),
+    organizationId: organizationId(),
     testId: varchar("test_id", { length: 32 })
       .notNull()
       .references(() => boilOffTests.id, { onDelete: "cascade" }),
@@ -91,8 +86,8 @@ export const boilOffTestFiles = mysqlTable(
     sizeBytes: bigint("size_bytes", { mode: "number", unsigned: true }).notNull(),
     sha256: char("sha256", { length: 64 }).notNull(),
     objectKey: varchar("object_key", { length: 300 }).notNull(),
-    uploadedByUserId: varchar("uploaded_by_user_id", { length: 32 }).references(() => users.id, { onDelete: "set null" }),
-    uploadedAt: datetime("uploaded_at", { mode: "date", fsp: 3 }).notNull(),
+    uploadedByUserId: userReference("uploaded_by_user_id"),
+    uploadedAt: datetimeMs("uploaded_at").notNull(),
   },
   (t) => [index("boil_off_test_files_test_idx").on(t.organizationId, t.testId, t.kind)],
 );
@@ -101,10 +96,8 @@ export const boilOffTestFiles = mysqlTable(
 export const alerts = mysqlTable(
   "alerts",
   {
-    id: varchar("id", { length: 32 }).primaryKey(),
-    organizationId: varchar("organization_id", { length: 32 })
-      .notNull()
-      .references(() => organizations.id, { onDelete: "cascade" }),
+    id: rowId(),
+    organizationId: organizationId(),
     testId: varchar("test_id", { length: 32 })
       .notNull()
       .references(() => boilOffTests.id, { onDelete: "cascade" }),
@@ -113,9 +106,9 @@ export const alerts = mysqlTable(
     measuredHeatLeak_W: double("measured_heat_leak_w").notNull(),
     predictedHeatLeak_W: double("predicted_heat_leak_w").notNull(),
     message: varchar("message", { length: 500 }).notNull(),
-    createdAt: datetime("created_at", { mode: "date", fsp: 3 }).notNull(),
-    acknowledgedAt: datetime("acknowledged_at", { mode: "date", fsp: 3 }),
-    acknowledgedByUserId: varchar("acknowledged_by_user_id", { length: 32 }).references(() => users.id, { onDelete: "set null" }),
+    createdAt: datetimeMs("created_at").notNull(),
+    acknowledgedAt: datetimeMs("acknowledged_at"),
+    acknowledgedByUserId: userReference("acknowledged_by_user_id"),
   },
   (t) => [index("alerts_org_open_idx").on(t.organizationId, t.acknowledgedAt)],
 );

@@ -1,18 +1,15 @@
-import { datetime, double, index, int, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { double, index, int, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import type { DesignContent } from "../../../shared/schemas/design";
 import type { ResolvedMaterial } from "../../../shared/design/to-assembly";
 import type { Prediction } from "../../../shared/design/prediction";
+import { datetimeMs, organizationId, rowId, userReference } from "./columns";
 import { jsonText } from "./json-text";
-import { organizations } from "./organizations";
-import { users } from "./users";
 
 export const designs = mysqlTable(
   "designs",
   {
-    id: varchar("id", { length: 32 }).primaryKey(),
-    organizationId: varchar("organization_id", { length: 32 })
-      .notNull()
-      .references(() => organizations.id, { onDelete: "cascade" }),
+    id: rowId(),
+    organizationId: organizationId(),
     name: varchar("name", { length: 120 }).notNull(),
     vesselLabel: varchar("vessel_label", { length: 120 }),
     geometryKind: mysqlEnum("geometry_kind", ["planar", "cylinder", "sphere"]).notNull(),
@@ -20,9 +17,9 @@ export const designs = mysqlTable(
     /** From the latest revision's prediction, so the list needs no JSON parsing. */
     coldHeat_W: double("cold_heat_w"),
     boilOff_L_per_day: double("boil_off_l_per_day"),
-    createdByUserId: varchar("created_by_user_id", { length: 32 }).references(() => users.id, { onDelete: "set null" }),
-    createdAt: datetime("created_at", { mode: "date", fsp: 3 }).notNull(),
-    updatedAt: datetime("updated_at", { mode: "date", fsp: 3 }).notNull(),
+    createdByUserId: userReference("created_by_user_id"),
+    createdAt: datetimeMs("created_at").notNull(),
+    updatedAt: datetimeMs("updated_at").notNull(),
   },
   (t) => [index("designs_org_idx").on(t.organizationId, t.updatedAt)],
 );
@@ -32,10 +29,8 @@ export const designs = mysqlTable(
 export const designRevisions = mysqlTable(
   "design_revisions",
   {
-    id: varchar("id", { length: 32 }).primaryKey(),
-    organizationId: varchar("organization_id", { length: 32 })
-      .notNull()
-      .references(() => organizations.id, { onDelete: "cascade" }),
+    id: rowId(),
+    organizationId: organizationId(),
     designId: varchar("design_id", { length: 32 })
       .notNull()
       .references(() => designs.id, { onDelete: "cascade" }),
@@ -45,8 +40,8 @@ export const designRevisions = mysqlTable(
     materials: jsonText<ResolvedMaterial[]>("materials").notNull(),
     prediction: jsonText<Prediction>("prediction").notNull(),
     changeNote: varchar("change_note", { length: 500 }),
-    createdByUserId: varchar("created_by_user_id", { length: 32 }).references(() => users.id, { onDelete: "set null" }),
-    createdAt: datetime("created_at", { mode: "date", fsp: 3 }).notNull(),
+    createdByUserId: userReference("created_by_user_id"),
+    createdAt: datetimeMs("created_at").notNull(),
   },
   (t) => [uniqueIndex("design_revision_unique").on(t.designId, t.revision), index("design_revisions_org_idx").on(t.organizationId)],
 );

@@ -1,15 +1,8 @@
-import { customType, datetime, double, index, int, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { double, index, int, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import { MATERIAL_KINDS, MATERIAL_STATUSES, VERSION_STATUSES, type MaterialProperties, type MaterialSource } from "../../../shared/schemas/material";
+import { datetimeMs, rowId, userReference } from "./columns";
+import { jsonText } from "./json-text";
 import { organizations } from "./organizations";
-import { users } from "./users";
-
-// MariaDB's JSON is LONGTEXT underneath and mysql2 hands it back as a string, so parse on read.
-const jsonText = <T>(name: string) =>
-  customType<{ data: T; driverData: string }>({
-    dataType: () => "json",
-    toDriver: (value) => JSON.stringify(value),
-    fromDriver: (value) => (typeof value === "string" ? JSON.parse(value) : value) as T,
-  })(name);
 
 /**
  * One library entry. organization_id NULL marks a global seed entry, shared read-only by every
@@ -18,7 +11,7 @@ const jsonText = <T>(name: string) =>
 export const materials = mysqlTable(
   "materials",
   {
-    id: varchar("id", { length: 32 }).primaryKey(),
+    id: rowId(),
     organizationId: varchar("organization_id", { length: 32 }).references(() => organizations.id, { onDelete: "cascade" }),
     kind: mysqlEnum("kind", MATERIAL_KINDS).notNull(),
     name: varchar("name", { length: 120 }).notNull(),
@@ -28,11 +21,11 @@ export const materials = mysqlTable(
     draftVersion: int("draft_version"),
     copiedFromMaterialId: varchar("copied_from_material_id", { length: 32 }),
     copiedFromVersion: int("copied_from_version"),
-    retiredAt: datetime("retired_at", { mode: "date", fsp: 3 }),
-    retiredByUserId: varchar("retired_by_user_id", { length: 32 }).references(() => users.id, { onDelete: "set null" }),
+    retiredAt: datetimeMs("retired_at"),
+    retiredByUserId: userReference("retired_by_user_id"),
     retireComment: varchar("retire_comment", { length: 1000 }),
-    createdAt: datetime("created_at", { mode: "date", fsp: 3 }).notNull(),
-    updatedAt: datetime("updated_at", { mode: "date", fsp: 3 }).notNull(),
+    createdAt: datetimeMs("created_at").notNull(),
+    updatedAt: datetimeMs("updated_at").notNull(),
   },
   // The collation is case-insensitive, so "Copper" and "copper" collide within one organization.
   (t) => [uniqueIndex("materials_org_name_unique").on(t.organizationId, t.name), index("materials_org_kind_idx").on(t.organizationId, t.kind)],
@@ -42,7 +35,7 @@ export const materials = mysqlTable(
 export const materialVersions = mysqlTable(
   "material_versions",
   {
-    id: varchar("id", { length: 32 }).primaryKey(),
+    id: rowId(),
     materialId: varchar("material_id", { length: 32 })
       .notNull()
       .references(() => materials.id, { onDelete: "cascade" }),
@@ -57,10 +50,10 @@ export const materialVersions = mysqlTable(
     costPerM2: double("cost_per_m2"),
     source: jsonText<MaterialSource>("source").notNull(),
     changeNote: varchar("change_note", { length: 500 }),
-    proposedByUserId: varchar("proposed_by_user_id", { length: 32 }).references(() => users.id, { onDelete: "set null" }),
-    proposedAt: datetime("proposed_at", { mode: "date", fsp: 3 }).notNull(),
-    decidedByUserId: varchar("decided_by_user_id", { length: 32 }).references(() => users.id, { onDelete: "set null" }),
-    decidedAt: datetime("decided_at", { mode: "date", fsp: 3 }),
+    proposedByUserId: userReference("proposed_by_user_id"),
+    proposedAt: datetimeMs("proposed_at").notNull(),
+    decidedByUserId: userReference("decided_by_user_id"),
+    decidedAt: datetimeMs("decided_at"),
     decisionComment: varchar("decision_comment", { length: 1000 }),
   },
   (t) => [uniqueIndex("material_versions_unique").on(t.materialId, t.version)],
