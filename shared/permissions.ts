@@ -22,6 +22,8 @@ export const ACTIONS = [
   "comment:test",
   "delete:test",
   "acknowledge:alert",
+  /** Alert e-mails: owners always, engineers for the designs they created or revised. */
+  "receive:alert-mail",
   "edit:settings",
 ] as const;
 export type Action = (typeof ACTIONS)[number];
@@ -30,13 +32,17 @@ const READ: Action[] = ["read:organization", "read:team", "read:design", "read:m
 
 export const PERMISSIONS: Record<Role, readonly Action[]> = {
   owner: [...ACTIONS],
-  engineer: [...READ, "edit:design", "propose:material", "create:test", "comment:test", "acknowledge:alert"],
+  engineer: [...READ, "edit:design", "propose:material", "create:test", "comment:test", "acknowledge:alert", "receive:alert-mail"],
   technician: [...READ, "create:test", "comment:test"],
   viewer: [...READ],
 };
 
 export function can(role: Role, action: Action): boolean {
   return PERMISSIONS[role].includes(action);
+}
+
+export function rolesThatCan(action: Action): Role[] {
+  return ROLES.filter((role) => can(role, action));
 }
 
 export function permissionsOf(role: Role): Action[] {

@@ -15,7 +15,7 @@ export async function loadMe(ctx: ServiceContext, userId: string): Promise<Me> {
   const account = await accounts.findAccountByUserId(ctx.db, userId);
   if (!account) throw unauthenticated();
   return {
-    user: { id: account.user.id, name: account.user.name, email: account.user.email, unitSystem: account.user.unitSystem },
+    user: { id: account.user.id, name: account.user.name, email: account.user.email, unitSystem: account.user.unitSystem, alertEmails: account.user.alertEmails },
     organization: { id: account.organization.id, name: account.organization.name },
     role: account.membership.role,
     permissions: permissionsOf(account.membership.role),
@@ -97,6 +97,6 @@ export function isDuplicateKey(error: unknown): boolean {
 
 /** A person's own display preferences; the engine and the stored data stay SI. */
 export async function updatePreferences(ctx: ServiceContext, userId: string, input: PreferencesInput): Promise<Me> {
-  await accounts.updateUnitSystem(ctx.db, userId, input.unitSystem);
+  await accounts.updatePreferences(ctx.db, userId, input);
   return loadMe(ctx, userId);
 }

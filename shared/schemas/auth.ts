@@ -32,7 +32,7 @@ export const PasswordResetConfirmSchema = z.object({ token: TokenSchema, passwor
 export type PasswordResetConfirm = z.infer<typeof PasswordResetConfirmSchema>;
 
 export const MeSchema = z.object({
-  user: z.object({ id: IdSchema, name: z.string(), email: z.string(), unitSystem: UnitSystemSchema }),
+  user: z.object({ id: IdSchema, name: z.string(), email: z.string(), unitSystem: UnitSystemSchema, alertEmails: z.boolean() }),
   organization: z.object({ id: IdSchema, name: z.string() }),
   role: RoleSchema,
   permissions: z.array(z.enum(ACTIONS)),
@@ -40,5 +40,8 @@ export const MeSchema = z.object({
 });
 export type Me = z.infer<typeof MeSchema>;
 
-export const PreferencesInputSchema = z.object({ unitSystem: UnitSystemSchema });
+/** Either preference, or both; a body with neither changes nothing and is refused. */
+export const PreferencesInputSchema = z
+  .object({ unitSystem: UnitSystemSchema.optional(), alertEmails: z.boolean({ error: "alertEmails must be true or false" }).optional() })
+  .refine((p) => p.unitSystem !== undefined || p.alertEmails !== undefined, { message: "give unitSystem (si or us) or alertEmails (true or false)", path: ["unitSystem"] });
 export type PreferencesInput = z.infer<typeof PreferencesInputSchema>;

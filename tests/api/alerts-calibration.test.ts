@@ -57,6 +57,28 @@ async function settle() {
 }
 
 describe("alerts", () => {
+  it("an owner who opted out of alert e-mails gets none; the design's engineer still does", async () => {
+    const owner = await t.signInAs("owner");
+    const off = await owner.patch("/api/auth/me/preferences").send({ alertEmails: false });
+    expect(off.status).toBe(200);
+    expect(off.body.user.alertEmails).toBe(false);
+    expect(off.body.user.unitSystem).toBe("si"); // the other preference is left as it was
+    const bad = await owner.patch("/api/auth/me/preferences").send({ alertEmails: "no" });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.map((f: { path: string }) => f.path)).toEqual(["alertEmails"]);
+    const empty = await owner.patch("/api/auth/me/preferences").send({});
+    expect(empty.status).toBe(400);
+    expect((await owner.get("/api/auth/me")).body.user.alertEmails).toBe(false);
+
+    t.smtp.clear();
+    const { technician, test } = await analysedTest(1.4);
+    expect((await technician.post(`/api/boil-off-tests/${test.id}/accept`)).status).toBe(200);
+    const mails = await settle();
+    expect(mails.map((m) => m.to).flat()).toEqual(["engineer@kestrelbay.example"]);
+    // The alert itself is raised as before and shows on Overview for everyone.
+    expect((await owner.get("/api/alerts")).body.alerts).toHaveLength(1);
+  });
+
   it("an accepted test over the threshold mails the owners and the design's engineers, and shows until acknowledged", async () => {
     const bystander = await invite("engineer", "bystander.engineer@kestrelbay.example");
     const other = await t.signUpOtherOrganization();

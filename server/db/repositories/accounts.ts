@@ -64,6 +64,6 @@ export async function consumePasswordResetToken(db: Tx, tokenHash: string, now: 
   return row;
 }
 
-export async function updateUnitSystem(db: Tx, userId: string, unitSystem: "si" | "us") {
-  await db.update(users).set({ unitSystem }).where(eq(users.id, userId));
+export async function updatePreferences(db: Tx, userId: string, preferences: { unitSystem?: "si" | "us"; alertEmails?: boolean }) {
+  await db.update(users).set(preferences).where(eq(users.id, userId));
 }

@@ -1,4 +1,5 @@
 import { and, asc, desc, eq, inArray, isNotNull, isNull } from "drizzle-orm";
+import { rolesThatCan } from "../../../shared/permissions";
 import type { Tx } from "../client";
 import { alerts, boilOffTests, designRevisions, designs, memberships, users } from "../schema";
 
@@ -71,7 +72,7 @@ export async function listAlertRecipients(db: Tx, organizationId: string, design
     .select({ userId: users.id, email: users.email, name: users.name, role: memberships.role })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
-    .where(and(eq(memberships.organizationId, organizationId), inArray(memberships.role, ["owner", "engineer"])))
+    .where(and(eq(memberships.organizationId, organizationId), inArray(memberships.role, rolesThatCan("receive:alert-mail")), eq(users.alertEmails, true)))
     .orderBy(asc(users.email));
   return members.filter((m) => m.role === "owner" || authorIds.has(m.userId)).map(({ email, name, role }) => ({ email, name, role }));
 }

@@ -1,4 +1,4 @@
-import { datetime, mysqlEnum, mysqlTable, uniqueIndex, varchar, index } from "drizzle-orm/mysql-core";
+import { boolean, datetime, mysqlEnum, mysqlTable, uniqueIndex, varchar, index } from "drizzle-orm/mysql-core";
 import { ROLES } from "../../../shared/permissions";
 import { organizations } from "./organizations";
 
@@ -10,6 +10,8 @@ export const users = mysqlTable(
     name: varchar("name", { length: 100 }).notNull(),
     passwordHash: varchar("password_hash", { length: 255 }).notNull(),
     unitSystem: mysqlEnum("unit_system", ["si", "us"]).notNull().default("si"),
+    /** Alert e-mails (a test over its prediction) for the owners and the design's engineers; each may opt out. */
+    alertEmails: boolean("alert_emails").notNull().default(true),
     createdAt: datetime("created_at", { mode: "date", fsp: 3 }).notNull(),
   },
   (t) => [uniqueIndex("users_email_unique").on(t.email)],

@@ -7,6 +7,7 @@ import { TextLink } from "../../../components/ui/text-link";
 import { paths } from "../../../config/paths";
 import { authKeys } from "../../../features/auth/api/auth-keys";
 import { useMe } from "../../../features/auth/api/get-me";
+import { AlertEmailSwitch } from "../../../features/auth/components/alert-email-switch";
 import { outboxKeys } from "../../../features/outbox/api/outbox-keys";
 import { teamQueryOptions, useTeam } from "../../../features/team/api/get-team";
 import { InvitationsList } from "../../../features/team/components/invitations-list";
@@ -59,6 +60,9 @@ export default function TeamRoute() {
               onMemberRemoved={refreshSessionIfSelf}
             />
           ) : null}
+        </Card>
+        <Card title="Your alert e-mails">
+          <AlertEmailSwitch current={me.user.alertEmails} receivesAlerts={me.permissions.includes("receive:alert-mail")} />
         </Card>
         {team.data ? (
           <Card title="Pending invitations">

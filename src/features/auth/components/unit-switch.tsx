@@ -10,7 +10,7 @@ const CHOICES: [UnitSystem, string][] = [
 /** The signed-in person's units; the engine and the stored data stay SI, only display changes. */
 export function UnitSwitch({ current }: { current: UnitSystem }) {
   const update = useUpdatePreferences();
-  const shown = update.isPending ? update.variables.unitSystem : current;
+  const shown = update.isPending && update.variables.unitSystem !== undefined ? update.variables.unitSystem : current;
   return (
     <fieldset className="space-y-1.5">
       <legend className="text-xs text-ink-300">Units</legend>

@@ -1,0 +1,1 @@
+ALTER TABLE `users` ADD `alert_emails` boolean DEFAULT true NOT NULL;
