@@ -36,9 +36,10 @@ const handbookTable = (e4: number, e77: number, e300: number): Emissivity => ({
 });
 const HANDBOOK_RANGE = { min: HANDBOOK_TEMPERATURES_K[0], max: HANDBOOK_TEMPERATURES_K[2] };
 
-function reflector(id: string, name: string, form: "film" | "foil", model: Emissivity, source: MaterialVersionInput["source"]): SeedEntry {
-  // Metallized on both faces, so both faces share one model.
-  return { id, input: entry(name, { kind: "reflector", form, warmSide: { model }, coldSide: { model } }, HANDBOOK_RANGE, source) };
+/** A reflector metallized on both faces, so both faces share one model, with its low/high band when one is given. */
+function reflector(id: string, name: string, form: "film" | "foil", model: Emissivity, source: MaterialVersionInput["source"], band?: { low: Emissivity; high: Emissivity }): SeedEntry {
+  const face = { model, ...(band ? { low: band.low, high: band.high } : {}) };
+  return { id, input: entry(name, { kind: "reflector", form, warmSide: face, coldSide: face }, HANDBOOK_RANGE, source) };
 }
 
 function wallFinish(id: string, name: string, model: Emissivity, range: { min: number; max: number }, source: MaterialVersionInput["source"]): SeedEntry {
@@ -51,11 +52,24 @@ function entry(name: string, properties: MaterialVersionInput["properties"], val
 
 const reflectors: SeedEntry[] = [
   reflector("seed-reflector-al-foil", "Bright aluminium foil", "foil", handbookTable(0.011, 0.018, 0.04), { ...BARRON, note: "values recalled, approximate; check before relying on them" }),
-  reflector("seed-reflector-al-polyester", "Double-aluminized polyester film (vacuum-deposited aluminium)", "film", handbookTable(0.015, 0.02, 0.035), {
-    ...BARRON,
-    note: "values recalled, approximate; the 300 K value agrees with the 0.031 the 1974 correlation was fitted with",
-  }),
-  reflector("seed-reflector-al-polyimide", "Double-aluminized polyimide film (vacuum-deposited aluminium)", "film", handbookTable(0.015, 0.025, 0.04), { ...FLYNN, note: "values recalled, approximate" }),
+  // The band is the spread of the films' values in handbook compilations as recalled (from
+  // memory): deposit thickness, handling and ageing move a film's emissivity by about that much.
+  reflector(
+    "seed-reflector-al-polyester",
+    "Double-aluminized polyester film (vacuum-deposited aluminium)",
+    "film",
+    handbookTable(0.015, 0.02, 0.035),
+    { ...BARRON, note: "values recalled, approximate; the 300 K value agrees with the 0.031 the 1974 correlation was fitted with; low/high band recalled as the spread between sources" },
+    { low: handbookTable(0.01, 0.015, 0.025), high: handbookTable(0.025, 0.03, 0.05) },
+  ),
+  reflector(
+    "seed-reflector-al-polyimide",
+    "Double-aluminized polyimide film (vacuum-deposited aluminium)",
+    "film",
+    handbookTable(0.015, 0.025, 0.04),
+    { ...FLYNN, note: "values recalled, approximate; low/high band recalled as the spread between sources" },
+    { low: handbookTable(0.01, 0.018, 0.03), high: handbookTable(0.025, 0.035, 0.055) },
+  ),
 ];
 
 const wallFinishes: SeedEntry[] = [
