@@ -17,10 +17,12 @@ import { AttachmentsPanel } from "../../../features/boil-off-tests/components/at
 import { CalibrationPanel } from "../../../features/boil-off-tests/components/calibration-panel";
 import { ComparisonPanel } from "../../../features/boil-off-tests/components/comparison-panel";
 import { FitSummary } from "../../../features/boil-off-tests/components/fit-summary";
+import { LiquidMassPanel } from "../../../features/boil-off-tests/components/liquid-mass-panel";
 import { LogUploadPanel } from "../../../features/boil-off-tests/components/log-upload-panel";
 import { NotesPanel } from "../../../features/boil-off-tests/components/notes-panel";
 import { StatusBadge } from "../../../features/boil-off-tests/components/status-badge";
 import { WindowSection } from "../../../features/boil-off-tests/components/window-section";
+import { focusLiquidMassField } from "../../../features/boil-off-tests/utils/liquid-mass";
 import { METHOD_LABELS } from "../../../features/boil-off-tests/utils/method-text";
 import { useCan } from "../../../lib/can";
 import { formatQuantity } from "../../../lib/format-quantity";
@@ -93,7 +95,12 @@ export default function BoilOffTestRoute() {
                 <FitSummary analysis={t.analysis} />
               </Card>
               <Card title="Measured against predicted">
-                <ComparisonPanel analysis={t.analysis} threshold={settings.data?.threshold} />
+                <ComparisonPanel
+                  analysis={t.analysis}
+                  threshold={settings.data?.threshold}
+                  onSetLiquidMass={open && canComment ? () => focusLiquidMassField(t.id) : undefined}
+                  liquidMass={<LiquidMassPanel key={t.id} test={t} canEdit={canComment} variant="section" />}
+                />
                 <div className="mt-4">
                   <AcceptPanel test={t} canAccept={canCreate} />
                 </div>
@@ -112,6 +119,7 @@ export default function BoilOffTestRoute() {
               ))}
             </dl>
           </Card>
+          {t.analysis ? null : <LiquidMassPanel key={t.id} test={t} canEdit={canComment} variant="card" />}
           <Card title="Calibration of the design">
             <CalibrationPanel designId={t.designId} designHref={(revision) => paths.app.design.getHref(t.designId, revision)} canApply={canEditDesign} />
           </Card>

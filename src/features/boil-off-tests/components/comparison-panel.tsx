@@ -1,7 +1,10 @@
+import type { ReactNode } from "react";
 import type { Analysis } from "../../../../shared/schemas/boil-off-test";
 import { Callout } from "../../../components/ui/callout";
+import { linkClass } from "../../../components/ui/text-link";
 import { formatNumber, formatQuantity } from "../../../lib/format-quantity";
 import { useUnitSystem } from "../../../lib/unit-system";
+import { LIQUID_MASS_FIGURES, LIQUID_MASS_TITLE, needsLiquidMassFigure } from "../utils/liquid-mass";
 import { MeasuredCautions } from "./measured-cautions";
 
 const signed = (text: string) => (text.startsWith("-") || text.startsWith("—") ? text : `+${text}`);
@@ -9,9 +12,17 @@ const signed = (text: string) => (text.startsWith("-") || text.startsWith("—")
 /**
  * Measured against predicted: the heat leak with its uncertainty, the revision's prediction,
  * and their ratio with its 95 % interval, flagged when it passes the organization's threshold.
- * The barometric correction shows with the pressure trend, or the reason it was not applied.
+ * The barometric correction shows with the pressure trend, or the reason it was not applied;
+ * when the log has a barometer, that reason points at the test's liquid-mass figure, and
+ * onSetLiquidMass (given to those who may change it) takes the user to its field.
  */
-export function ComparisonPanel({ analysis: a, threshold }: { analysis: Analysis; threshold?: number }) {
+export function ComparisonPanel({ analysis: a, threshold, onSetLiquidMass, liquidMass }: {
+  analysis: Analysis;
+  threshold?: number;
+  onSetLiquidMass?: () => void;
+  /** The test's liquid-mass figure, shown right under the correction it feeds. */
+  liquidMass?: ReactNode;
+}) {
   const system = useUnitSystem();
   const heat = (w: number | null) => formatQuantity("heat", w, system);
   const over = a.ratio !== null && threshold !== undefined && a.ratio > threshold;
@@ -74,11 +85,24 @@ export function ComparisonPanel({ analysis: a, threshold }: { analysis: Analysis
                 {signed(heat(correction.correction_W))} ± {heat(correction.correctionStdError_W)}, included above; {formatQuantity("mass", correction.liquidMass_kg, system)} of liquid; uncorrected {heat(a.uncorrectedHeatLeak_W ?? null)}
               </dd>
             ) : (
-              <dd>Not applied: {correction.reason}</dd>
+              <dd>
+                Not applied: {correction.reason}.
+                {a.pressureTrend && needsLiquidMassFigure(a.method) ? (
+                  <>
+                    {" "}The liquid mass comes from the test's {LIQUID_MASS_FIGURES[a.method].label.toLowerCase()}, under {LIQUID_MASS_TITLE} below.{" "}
+                    {onSetLiquidMass ? (
+                      <button type="button" onClick={onSetLiquidMass} className={linkClass}>
+                        Set the {LIQUID_MASS_FIGURES[a.method].label.toLowerCase()}
+                      </button>
+                    ) : null}
+                  </>
+                ) : null}
+              </dd>
             )}
           </>
         ) : null}
       </dl>
+      {liquidMass}
       {a.warnings.length > 0 ? (
         <Callout tone="warning" title="About this analysis">
           <ul className="list-disc pl-4">{a.warnings.map((w) => <li key={w}>{w}</li>)}</ul>

@@ -1,24 +1,24 @@
 import { useState } from "react";
-import { useController, type Control } from "react-hook-form";
-import type { CreateTestInput } from "../../../../shared/schemas/boil-off-test";
+import { useController, type Control, type FieldPath, type FieldValues } from "react-hook-form";
 import { unitLabel, type QuantityKind, type UnitSystem } from "../../../../shared/units";
 import { TextField } from "../../../components/ui/field";
 import { inputText, localizeRange, parseInput } from "../../../lib/format-quantity";
 import { useUnitSystem } from "../../../lib/unit-system";
 
-type QuantityName = "ambientTemperature_K" | "ambientPressure_Pa" | "capacity_L" | "fullScale_mm" | "tareMass_kg" | "fillFraction";
-
 /**
  * An optional number typed in the user's unit system while the form keeps SI. What was typed
- * stays on screen as typed (a wrong "abc" too, so the schema's message can point at it).
+ * stays on screen as typed (a wrong "abc" too, so the schema's message can point at it). An
+ * empty field is `empty`: undefined (left out) in a new test, null (cleared) in a change.
  */
-export function QuantityInput({ control, name, label, kind, suffix, hint }: {
-  control: Control<CreateTestInput>;
-  name: QuantityName;
+export function QuantityInput<T extends FieldValues>({ control, name, label, kind, suffix, hint, id, empty }: {
+  control: Control<T>;
+  name: FieldPath<T>;
   label: string;
   kind: QuantityKind | null;
   suffix?: string;
   hint?: string;
+  id?: string;
+  empty?: null;
 }) {
   const { field: { ref, value: fieldValue, onChange, onBlur, name: fieldName }, fieldState } = useController({ control, name });
   const system = useUnitSystem();
@@ -28,6 +28,7 @@ export function QuantityInput({ control, name, label, kind, suffix, hint }: {
   const error = fieldState.error?.message;
   return (
     <TextField
+      id={id}
       label={unit ? `${label} (${unit})` : label}
       inputMode="decimal"
       autoComplete="off"
@@ -36,7 +37,7 @@ export function QuantityInput({ control, name, label, kind, suffix, hint }: {
       value={text}
       onBlur={onBlur}
       onChange={(event) => {
-        const value = parseInput(kind, event.target.value, system, undefined) ?? undefined;
+        const value = parseInput(kind, event.target.value, system, empty);
         setDraft({ text: event.target.value, value, system });
         onChange(value);
       }}
