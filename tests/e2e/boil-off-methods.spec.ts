@@ -69,7 +69,7 @@ const settling = (t: number) => 1 + 0.8 * Math.exp((-t * Math.LN2) / 1800);
 
 /** Through the New test form, on the design's latest revision and its cold vessel. */
 async function createTest(page: Page, opts: { design: string; method: string; vessel: string; fill?: (form: Locator) => Promise<void> }) {
-  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Boil-off tests" }).click();
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Tests", exact: true }).click();
   await page.getByRole("link", { name: "New test" }).click();
   const form = page.getByRole("form", { name: "New boil-off test" });
   await form.getByLabel("Design", { exact: true }).selectOption({ label: opts.design });
@@ -298,7 +298,7 @@ test("the owner deletes a test and it leaves the tests table; a technician is of
   await signedInAs(page, TECHNICIAN);
   await createTest(page, { design: NITROGEN_DESIGN, method: "Weighing", vessel });
   await expect(page.getByRole("button", { name: /Delete/ })).toHaveCount(0);
-  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Boil-off tests" }).click();
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Tests", exact: true }).click();
   const technicianTable = page.getByRole("table", { name: "Boil-off tests" });
   await expect(technicianTable.getByRole("row").filter({ hasText: vessel })).toHaveCount(1);
   await expect(page.getByRole("button", { name: /Delete/ })).toHaveCount(0);
@@ -308,14 +308,14 @@ test("the owner deletes a test and it leaves the tests table; a technician is of
   const owner = await ownerContext.newPage();
   const ownerErrors = failOnConsoleErrors(owner);
   await signedInAs(owner, OWNER);
-  await owner.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Boil-off tests" }).click();
+  await owner.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Tests", exact: true }).click();
   const table = owner.getByRole("table", { name: "Boil-off tests" });
   await table.getByRole("link", { name: vessel }).click();
   await expect(owner.getByRole("heading", { level: 1, name: vessel })).toBeVisible();
   await owner.getByRole("button", { name: "Delete this test" }).click();
   const dialog = owner.getByRole("dialog", { name: `Delete the test of ${vessel}?` });
   await dialog.getByRole("button", { name: "Delete test" }).click();
-  await expect(owner.getByRole("heading", { level: 1, name: "Boil-off tests" })).toBeVisible();
+  await expect(owner.getByRole("heading", { level: 1, name: "Tests", exact: true })).toBeVisible();
   await expect(table.getByRole("link", { name: "Magnet cryostat MC-250", exact: true })).toBeVisible();
   await expect(table.getByRole("row").filter({ hasText: vessel })).toHaveCount(0);
   await owner.reload();

@@ -79,8 +79,8 @@ test("a technician logs a weighing test over its prediction, and the owner finds
   const vessel = `Storage dewar SD-180 (e2e ${Date.now()})`;
   const errors = failOnConsoleErrors(page, /status of (401|400)/);
   await signIn(page, TECHNICIAN);
-  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Boil-off tests" }).click();
-  await expect(page.getByRole("heading", { level: 1, name: "Boil-off tests" })).toBeVisible();
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Tests", exact: true }).click();
+  await expect(page.getByRole("heading", { level: 1, name: "Tests", exact: true })).toBeVisible();
   await page.getByRole("link", { name: "New test" }).click();
 
   const form = page.getByRole("form", { name: "New boil-off test" });
@@ -179,7 +179,7 @@ test("a technician logs a weighing test over its prediction, and the owner finds
   await expect(alert).toContainText(/1\.6\d*× its prediction/);
 
   // Owners set the threshold; a value out of range is refused naming the field and the range, as typed.
-  await owner.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Boil-off tests" }).click();
+  await owner.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Tests", exact: true }).click();
   const threshold = owner.getByRole("form", { name: "Alert threshold" }).getByLabel(/^Alert threshold/);
   await expect(threshold).toHaveValue("1.25");
   await threshold.fill("0.5");
@@ -212,7 +212,7 @@ test("a technician logs a weighing test over its prediction, and the owner finds
 test("a viewer reads the tests and a test's analysis but is offered nothing to change", async ({ page }) => {
   const errors = failOnConsoleErrors(page);
   await signIn(page, VIEWER);
-  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Boil-off tests" }).click();
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Tests", exact: true }).click();
   const table = page.getByRole("table", { name: "Boil-off tests" });
   await expect(table.getByRole("link", { name: "Magnet cryostat MC-250" })).toBeVisible();
   await expect(page.getByRole("link", { name: "New test" })).toHaveCount(0);

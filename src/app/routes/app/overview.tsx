@@ -22,7 +22,7 @@ function TestsOverview() {
       <Card title="Open alerts">
         <OpenAlerts testHref={testHref} />
       </Card>
-      <Card title="Recent boil-off tests" actions={<TextLink to={paths.app.tests.getHref()}>All tests</TextLink>}>
+      <Card title="Recent tests" actions={<TextLink to={paths.app.tests.getHref()}>All tests</TextLink>}>
         {tests.error ? <ErrorMessage error={tests.error} title="Could not load the tests" /> : null}
         {tests.data ? <RecentTests tests={tests.data.tests} hrefOf={testHref} threshold={settings.data?.threshold} /> : null}
       </Card>

@@ -30,7 +30,7 @@ function navFor(me: Me): NavItem[] {
     { label: "Designs", to: paths.app.designs.getHref() },
     { label: "Compare", to: paths.app.compare.getHref() },
     { label: "Library", to: paths.app.library.getHref() },
-    { label: "Boil-off tests", to: paths.app.tests.getHref() },
+    { label: "Tests", to: paths.app.tests.getHref() },
     { label: "Team", to: paths.app.team.getHref() },
     ...(me.localMail && can(me.role, "read:outbox") ? [{ label: "Outbox", to: paths.app.outbox.getHref() }] : []),
   ];

@@ -24,8 +24,8 @@ export default function BoilOffTestsRoute() {
   const settings = useAlertSettings();
   return (
     <>
-      <title>Boil-off tests · Frostfold</title>
-      <PageHeader title="Boil-off tests" description="Each measured boil-off, pinned to the design revision whose prediction it checks: measured heat leak, predicted, and their ratio." />
+      <title>Tests · Frostfold</title>
+      <PageHeader title="Tests" description="Each measured boil-off, pinned to the design revision whose prediction it checks: measured heat leak, predicted, and their ratio." />
       <div className="space-y-4">
         <div className="flex justify-end">
           <Can action="create:test">
