@@ -8,6 +8,7 @@ import {
   EstimateInputSchema,
   RevisionParamsSchema,
   SaveRevisionInputSchema,
+  SweepInputSchema,
 } from "../../shared/schemas/design";
 import { actorOf, requirePermission } from "../middleware/require-permission";
 import { parseInput } from "../middleware/validate";
@@ -64,6 +65,9 @@ export function estimateRouter(ctx: ServiceContext): Router {
   router.post("/estimate", requirePermission("read:design"), async (req, res) => {
     const { content, sweep } = parseInput(EstimateInputSchema, req.body);
     res.json(await designs.estimate(ctx, actorOf(req), content, { sweep }));
+  });
+  router.post("/estimate/sweep", requirePermission("read:design"), async (req, res) => {
+    res.json(await designs.sweepEstimate(ctx, actorOf(req), parseInput(SweepInputSchema, req.body)));
   });
   router.get("/compare", requirePermission("read:design"), async (req, res) => {
     const { ids, price_per_L } = parseInput(CompareQuerySchema, req.query, "query");

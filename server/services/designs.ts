@@ -1,6 +1,7 @@
 import { predictDesign } from "../../shared/design/predict";
 import type { Prediction } from "../../shared/design/prediction";
-import { MaterialReferenceError, materialKey, materialRefsOf } from "../../shared/design/to-assembly";
+import { runSweep, sweepPlanOf, SweepRangeError } from "../../shared/design/sweep-ranges";
+import { MaterialReferenceError, materialKey, materialRefsOf, toAssembly } from "../../shared/design/to-assembly";
 import type {
   CreateDesignInput,
   DesignContent,
@@ -8,6 +9,8 @@ import type {
   DesignSummary,
   RevisionDetail,
   SaveRevisionInput,
+  SweepInput,
+  SweepResult,
 } from "../../shared/schemas/design";
 import { insertAuditEntry } from "../db/repositories/audit";
 import * as repo from "../db/repositories/designs";
@@ -30,6 +33,25 @@ export async function predictContent(db: Tx, organizationId: string, content: De
 
 export async function estimate(ctx: ServiceContext, actor: Actor, content: DesignContent, options: { sweep: boolean }) {
   return predictContent(ctx.db, actor.organizationId, content, undefined, options);
+}
+
+/**
+ * Heat against layer density, warm temperature or pressure over the range the design implies
+ * (shared/design/sweep-ranges.ts). A variable that does not apply, or a bad blockIndex, is a 400
+ * naming the field; bad references are a 400 naming the form path, as in predictContent.
+ */
+export async function sweepEstimate(ctx: ServiceContext, actor: Actor, input: SweepInput): Promise<SweepResult> {
+  const { lookup } = await resolveDesignMaterials(ctx.db, actor.organizationId, input.content);
+  try {
+    const assembly = toAssembly(input.content, lookup);
+    const plan = sweepPlanOf(assembly, input.variable, input.blockIndex);
+    const points = runSweep(assembly, plan);
+    const stageLabels = assembly.layup.flatMap((item, i) => (item.kind === "stage" ? [item.label ?? `stage ${i + 1}`] : []));
+    return { variable: plan.variable, unit: plan.unit, designValue: plan.designValue, blockIndex: plan.blockIndex, blockLabel: plan.blockLabel, stageLabels, points };
+  } catch (error) {
+    if (error instanceof MaterialReferenceError || error instanceof SweepRangeError) throw invalidInput(error.message, [{ path: error.field, message: error.message }]);
+    throw error; // ThermalInputError becomes a 400 in the error handler
+  }
 }
 
 const summaryOf = (row: repo.DesignRow, createdBy: string | null): DesignSummary => ({

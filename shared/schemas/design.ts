@@ -156,6 +156,15 @@ export type SaveRevisionInput = z.infer<typeof SaveRevisionInputSchema>;
 export const DuplicateDesignInputSchema = z.object({ name: DesignNameSchema.optional() });
 /** sweep: false leaves the layer-count sweep out (null), for the quick figures of a live edit. */
 export const EstimateInputSchema = z.object({ content: DesignContentSchema, sweep: z.boolean({ error: "sweep must be true or false" }).default(true) });
+export const SWEEP_VARIABLES = ["layer-density", "warm-temperature", "pressure"] as const;
+export type SweepVariable = (typeof SWEEP_VARIABLES)[number];
+/** POST /api/estimate/sweep: the server chooses the range from the design (shared/design/sweep-ranges.ts). */
+export const SweepInputSchema = z.object({
+  content: DesignContentSchema,
+  variable: z.enum(SWEEP_VARIABLES, { error: `variable must be one of ${SWEEP_VARIABLES.join(", ")}` }),
+  blockIndex: whole("blockIndex", 0, 49).optional(),
+});
+export type SweepInput = z.infer<typeof SweepInputSchema>;
 export const DesignParamsSchema = z.object({ id: IdSchema });
 export const RevisionParamsSchema = z.object({
   id: IdSchema,
@@ -237,6 +246,21 @@ export type DesignDetail = z.infer<typeof DesignDetailSchema>;
 
 export const EstimateResultSchema = z.object({ prediction: PredictionSchema, materials: z.array(ResolvedMaterialSchema) });
 export type EstimateResult = z.infer<typeof EstimateResultSchema>;
+
+export const SweepResultSchema = z.object({
+  variable: z.enum(SWEEP_VARIABLES),
+  /** The SI unit of x and designValue. */
+  unit: z.enum(["layers/cm", "K", "Pa"]),
+  /** The design's own value of the variable. */
+  designValue: z.number(),
+  /** The swept block (layer density only). */
+  blockIndex: z.number().int().nullable(),
+  blockLabel: z.string().nullable(),
+  /** The cooled stages warm → cold, in the order of each point's heatIntoStages_W. */
+  stageLabels: z.array(z.string()),
+  points: z.array(z.object({ x: z.number(), coldHeat_W: z.number(), heatIntoStages_W: z.array(z.number()) })),
+});
+export type SweepResult = z.infer<typeof SweepResultSchema>;
 
 export const CompareItemSchema = z.object({
   designId: IdSchema,

@@ -3,6 +3,7 @@ import { Callout } from "../../../../components/ui/callout";
 import { Cautions } from "./cautions";
 import { ColdSummary } from "./cold-summary";
 import { LayerCountSweep } from "./layer-count-sweep";
+import { MoreSweeps } from "./more-sweeps";
 import { ResistanceLadder } from "./resistance-ladder";
 import { StageHeatTable } from "./stage-heat-table";
 import { WallSection } from "./wall-section";
@@ -70,6 +71,7 @@ export function ResultsPanel({ prediction, state, problems, sweepUpdating = fals
               <LayerCountSweep sweep={prediction.sweep} blockName={swept?.label ?? "the main block"} currentLayers={swept?.layers ?? null} />
             </Section>
           ) : null}
+          <Section title="More sweeps"><MoreSweeps accepted={state === "fresh"} /></Section>
         </div>
       ) : null}
       <Cautions />
