@@ -1,3 +1,4 @@
+import { memo } from "react";
 import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { LayerSweep } from "../../../../../shared/design/prediction";
 import { fromSi, unitLabel } from "../../../../../shared/units";
@@ -10,7 +11,7 @@ import { useUnitSystem } from "../../../../lib/unit-system";
  * horizontal line and the fewest layers that meet it marked; the sentence under the chart says
  * the same in words.
  */
-export function LayerCountSweep({ sweep, blockName, currentLayers }: { sweep: LayerSweep; blockName: string; currentLayers: number | null }) {
+function LayerCountSweepView({ sweep, blockName, currentLayers }: { sweep: LayerSweep; blockName: string; currentLayers: number | null }) {
   const system = useUnitSystem();
   const unit = unitLabel("heat", system);
   const data = sweep.points.map((p) => ({ layers: p.layers, heat: fromSi("heat", p.coldHeat_W, system) }));
@@ -48,3 +49,6 @@ export function LayerCountSweep({ sweep, blockName, currentLayers }: { sweep: La
     </figure>
   );
 }
+
+// Memoized: a keystroke re-renders the page, not this part, until a new answer changes its props.
+export const LayerCountSweep = memo(LayerCountSweepView);

@@ -1,3 +1,4 @@
+import { memo } from "react";
 import type { AssemblyResult } from "../../../../../shared/thermal/assembly";
 import { chartColors } from "../../../../components/charts/chart-theme";
 
@@ -42,7 +43,7 @@ function LadderBars({ ladder, title }: { ladder: Ladder; title: string }) {
   );
 }
 
-export function ResistanceLadder({ result }: { result: AssemblyResult }) {
+function ResistanceLadderView({ result }: { result: AssemblyResult }) {
   if (result.resistances.length === 0) {
     return <p className="text-sm text-ink-300">The ladder is drawn for radiation blocks; this layup's blocks use the correlation or layer-by-layer model.</p>;
   }
@@ -59,3 +60,6 @@ export function ResistanceLadder({ result }: { result: AssemblyResult }) {
     </div>
   );
 }
+
+// Memoized: a keystroke re-renders the page, not this part, until a new answer changes its props.
+export const ResistanceLadder = memo(ResistanceLadderView);

@@ -1,3 +1,4 @@
+import { memo } from "react";
 import type { AssemblyResult } from "../../../../../shared/thermal/assembly";
 import { formatQuantity } from "../../../../lib/format-quantity";
 import { useUnitSystem } from "../../../../lib/unit-system";
@@ -9,7 +10,7 @@ type Row = { label: string; value: (s: Stage, i: number) => string; strong?: boo
  * Heat into every sink, warm → cold, with its parts. Sinks are columns (a design has a few),
  * quantities rows, so the table stays narrow beside the form.
  */
-export function StageHeatTable({ result }: { result: AssemblyResult }) {
+function StageHeatTableView({ result }: { result: AssemblyResult }) {
   const system = useUnitSystem();
   const heat = (w: number) => formatQuantity("heat", w, system);
   const band = result.band;
@@ -59,3 +60,6 @@ export function StageHeatTable({ result }: { result: AssemblyResult }) {
     </div>
   );
 }
+
+// Memoized: a keystroke re-renders the page, not this part, until a new answer changes its props.
+export const StageHeatTable = memo(StageHeatTableView);

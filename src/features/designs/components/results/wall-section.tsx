@@ -1,3 +1,4 @@
+import { memo } from "react";
 import type { AssemblyResult } from "../../../../../shared/thermal/assembly";
 import { fromSi, toSi, unitLabel, type UnitSystem } from "../../../../../shared/units";
 import { formatNumber, formatQuantity } from "../../../../lib/format-quantity";
@@ -26,7 +27,7 @@ function temperatureTicks(max_K: number, system: UnitSystem) {
  * shield, stages heavier and labelled, each block shaded, and the temperature profile against
  * the scale on the left. Shields are evenly spaced, as the engine places them.
  */
-export function WallSection({ result, warm_K }: { result: AssemblyResult; warm_K: number }) {
+function WallSectionView({ result, warm_K }: { result: AssemblyResult; warm_K: number }) {
   const system = useUnitSystem();
   const { shields, stages, blocks } = result;
   const cold = stages[stages.length - 1];
@@ -112,3 +113,6 @@ export function WallSection({ result, warm_K }: { result: AssemblyResult; warm_K
     </svg>
   );
 }
+
+// Memoized: a keystroke re-renders the page, not this part, until a new answer changes its props.
+export const WallSection = memo(WallSectionView);
