@@ -3,19 +3,9 @@
 # a benchmark fails only when it cannot run (a refused request, a missing demo design).
 # Each uses its own ports and data folders, so it can run beside `npm start` and `npm test`.
 set -uo pipefail
-cd "$(dirname "$0")/.."
-bash scripts/ensure-deps.sh --with-browser || exit 1
-export PATH="$PATH:/usr/sbin:/sbin"
-# The pinned S3 SDK runs on Node.js 20; its notice about future releases needing 22 is noise here.
-export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
-
-failed=()
-step() {
-  local name="$1"; shift
-  echo ""
-  echo "=== $name ==="
-  if "$@"; then :; else echo "=== $name: could not run ==="; failed+=("$name"); fi
-}
+# A benchmark prints its own figures; only one that could not run is reported.
+RUNNER_PASSED_WORD="" RUNNER_FAILED_WORD="could not run"
+source "$(dirname "$0")/runner.sh"
 
 step "engine (vitest bench)" npx vitest bench --run --project shared
 step "1,000,000-row log upload" npx tsx tests/bench/boil-off-upload.ts

@@ -3,6 +3,7 @@ import os from "node:os";
 import path from "node:path";
 import type { TestMethod } from "../../shared/schemas/boil-off-test";
 import type { Prediction } from "../../shared/design/prediction";
+import { gaussianNoise } from "../../shared/seeded-noise";
 import { boilOff, type CryogenId } from "../../shared/thermal";
 import * as accounts from "../db/repositories/accounts";
 import { listTests } from "../db/repositories/boil-off-tests";
@@ -38,22 +39,11 @@ const LOGS: DemoLog[] = [
   { design: DEMO_DESIGN_NAMES[2], vesselLabel: "Detector dewar DD-3", method: "level", ratio: 1.4, hours: 12, stepSeconds: 60, accept: true, notes: "Level gauge log after the dewar was bumped in transport. (Demo data, invented.)" },
 ];
 
-/** A small seeded generator, so the demo is the same on every machine (mulberry32). */
-function random(seed: number) {
-  let a = seed >>> 0;
-  const uniform = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = Math.imul(a ^ (a >>> 15), 1 | a);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-  return () => Math.sqrt(-2 * Math.log(uniform() || 1e-12)) * Math.cos(2 * Math.PI * uniform()); // Box–Muller
-}
 
 /** The CSV a logger would write for this vessel: its boil-off signal from the engine's boilOff. */
 function demoCsv(log: DemoLog, heat_W: number, cryogen: CryogenId, capacity_L: number | null): string {
   const b = boilOff({ heat_W, cryogen, capacity_L: capacity_L ?? undefined });
-  const noise = random(Math.round(heat_W * 1e6));
+  const noise = gaussianNoise(Math.round(heat_W * 1e6));
   const n = Math.round((log.hours * 3600) / log.stepSeconds) + 1;
   const start = Date.parse("2026-11-02T08:00:00Z");
   const lines: string[] = [];

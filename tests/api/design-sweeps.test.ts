@@ -5,6 +5,7 @@ import { DesignContentSchema, SweepResultSchema, type DesignContentInput, type S
 import { CRYOGENS } from "../../shared/thermal/fluids";
 import { sweepLayerDensity, sweepPressure, sweepWarmTemperature, type SweepPoint } from "../../shared/thermal/sweeps";
 import { resolveDesignMaterials } from "../../server/services/design-materials";
+import { libraryRef, panelContent } from "../support/designs";
 import { startTestApp, type TestApp } from "../support/test-app";
 
 let t: TestApp;
@@ -16,25 +17,11 @@ beforeEach(async () => t.reset());
 
 type Agent = ReturnType<TestApp["agent"]>;
 
-async function ref(materialId: string) {
-  const res = await (await t.signInAs("viewer")).get(`/api/materials/${materialId}`);
-  expect(res.status, materialId).toBe(200);
-  return { materialId, version: res.body.currentVersion as number };
-}
+const ref = async (materialId: string) => libraryRef(await t.signInAs("viewer"), materialId);
 const CORRELATION_ID = "seed-corr-kcg-1974-polyester-netting".slice(0, 32); // as the seed names it
 
-/** A flat panel between a 300 K wall and liquid nitrogen, with one radiation block (as in designs.test.ts). */
-async function panel(layers = 10): Promise<DesignContentInput> {
-  const steel = await ref("seed-wall-ss304-polished");
-  return {
-    geometry: { kind: "planar", area_m2: 2 },
-    warm: { temperature_K: 300, finish: steel },
-    cold: { cryogen: await ref("seed-cryogen-nitrogen"), finish: steel, capacity_L: 100 },
-    layup: [{ kind: "block", layers, reflector: await ref("seed-reflector-al-polyester"), layerDensity_per_cm: 20, model: "radiation" }],
-    vacuum: { pressure_Pa: 1e-4, gas: "nitrogen" },
-    targetColdHeat_W: 1,
-  };
-}
+/** A flat panel between a 300 K wall and liquid nitrogen, with one radiation block and a 1 W target. */
+const panel = async (layers = 10): Promise<DesignContentInput> => panelContent(await t.signInAs("viewer"), { layers, targetColdHeat_W: 1 });
 
 /**
  * A helium cylinder with a nitrogen-cooled shield: a correlation blanket outside the shield, a

@@ -3,6 +3,7 @@ import { predictDesign } from "../../shared/design/predict";
 import { DesignContentSchema, DesignDetailSchema, RevisionDetailSchema, type DesignContentInput } from "../../shared/schemas/design";
 import { resolveDesignMaterials } from "../../server/services/design-materials";
 import { countRows } from "../support/database";
+import { libraryRef, panelContent } from "../support/designs";
 import { startTestApp, type TestApp } from "../support/test-app";
 
 let t: TestApp;
@@ -12,23 +13,10 @@ beforeAll(async () => {
 afterAll(async () => t.stop());
 beforeEach(async () => t.reset());
 
-async function ref(materialId: string) {
-  const res = await (await t.signInAs("viewer")).get(`/api/materials/${materialId}`);
-  return { materialId, version: res.body.currentVersion as number };
-}
+const ref = async (materialId: string) => libraryRef(await t.signInAs("viewer"), materialId);
 
-/** A flat panel between a 300 K wall and liquid nitrogen, with one radiation block. */
-async function panel(layers = 10): Promise<DesignContentInput> {
-  const steel = await ref("seed-wall-ss304-polished");
-  return {
-    geometry: { kind: "planar", area_m2: 2 },
-    warm: { temperature_K: 300, finish: steel },
-    cold: { cryogen: await ref("seed-cryogen-nitrogen"), finish: steel, capacity_L: 100 },
-    layup: [{ kind: "block", layers, reflector: await ref("seed-reflector-al-polyester"), layerDensity_per_cm: 20, model: "radiation" }],
-    vacuum: { pressure_Pa: 1e-4, gas: "nitrogen" },
-    targetColdHeat_W: 1,
-  };
-}
+/** A flat panel between a 300 K wall and liquid nitrogen, with one radiation block and a 1 W target. */
+const panel = async (layers = 10): Promise<DesignContentInput> => panelContent(await t.signInAs("viewer"), { layers, targetColdHeat_W: 1 });
 
 async function createAs(role: "engineer" | "owner", name = "Test panel", layers = 10) {
   const agent = await t.signInAs(role);

@@ -21,6 +21,7 @@ import { parse } from "csv-parse";
 import { Writable } from "node:stream";
 import { pipeline } from "node:stream/promises";
 import { DEMO_PASSWORD, DEMO_USERS } from "../../server/db/seed/demo";
+import { gaussianNoise } from "../../shared/seeded-noise";
 import { startLocalStack } from "../../server/local/stack";
 import { parseLoggerFile } from "../../server/services/logger-files";
 
@@ -31,17 +32,6 @@ const DB_PORT = Number(process.env.UPLOAD_BENCH_DB_PORT ?? 3389);
 const fmt = (x: number) => Math.round(x).toLocaleString("en-US");
 const seconds = (ms: number) => `${(ms / 1000).toFixed(2)} s`;
 
-/** mulberry32 + Box–Muller, so every run sends the same file. */
-function gaussian(seed: number) {
-  let a = seed >>> 0;
-  const uniform = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = Math.imul(a ^ (a >>> 15), 1 | a);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-  return () => Math.sqrt(-2 * Math.log(uniform() || 1e-12)) * Math.cos(2 * Math.PI * uniform());
-}
 
 /**
  * Invented: a 160 kg dewar losing `rate_kg_per_s`, 2 g scale noise, one reading a second for
@@ -49,7 +39,7 @@ function gaussian(seed: number) {
  */
 async function writeLog(file: string, rows: number, rate_kg_per_s: number) {
   const out = createWriteStream(file);
-  const noise = gaussian(42);
+  const noise = gaussianNoise(42); // the same file on every run
   const start = Date.parse("2026-11-02T08:00:00Z");
   let chunk = "timestamp,gross mass (kg),barometer (hPa)\n";
   for (let i = 0; i < rows; i++) {

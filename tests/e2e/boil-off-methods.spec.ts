@@ -1,33 +1,15 @@
 import { expect, test, type BrowserContext, type Locator, type Page } from "@playwright/test";
+import { failOnConsoleErrors, signIn } from "../support/browser";
 import { z } from "zod";
 import { boilOff, measuredHeatLeak, type CryogenId } from "../../shared/thermal";
 
 // The seeded demo organization (server/db/seed/demo.ts) and two of its designs. Every test here
 // makes its own tests with their own vessel labels, so the order of specs does not matter.
-const PASSWORD = "frostfold-demo";
 const TECHNICIAN = "technician@kestrelbay.example";
 const OWNER = "owner@kestrelbay.example";
 const VIEWER = "viewer@kestrelbay.example";
 const HELIUM_DESIGN = "250 L helium magnet cryostat";
 const NITROGEN_DESIGN = "180 L liquid-nitrogen storage dewar";
-
-/** The one expected console line is the 401 of GET /api/auth/me for a signed-out visitor. */
-function failOnConsoleErrors(page: Page, allowed = /status of 401/) {
-  const errors: string[] = [];
-  page.on("console", (msg) => {
-    if (msg.type() === "error" && !allowed.test(msg.text())) errors.push(msg.text());
-  });
-  page.on("pageerror", (error) => errors.push(error.message));
-  return errors;
-}
-
-async function signIn(page: Page, email: string) {
-  await page.goto("/sign-in");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password", { exact: true }).fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page.getByRole("heading", { level: 1, name: /^Welcome, / })).toBeVisible();
-}
 
 // Each role signs in through the form once for the whole file, and each test starts from that
 // session: the suite signs everyone in from one address, under the server's sign-in limit.

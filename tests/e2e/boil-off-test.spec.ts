@@ -1,37 +1,16 @@
 import { writeFile } from "node:fs/promises";
+import { failOnConsoleErrors, signIn } from "../support/browser";
 import { expect, test, type Page } from "@playwright/test";
 import { z } from "zod";
 import { boilOff, type CryogenId } from "../../shared/thermal";
 
 // The seeded demo organization (server/db/seed/demo.ts) and its nitrogen dewar design.
-const PASSWORD = "frostfold-demo";
 const TECHNICIAN = "technician@kestrelbay.example";
 const OWNER = "owner@kestrelbay.example";
 const VIEWER = "viewer@kestrelbay.example";
 const DESIGN = "180 L liquid-nitrogen storage dewar";
 /** Invented: the vessel boils off 60 % more than its prediction, above the default 1.25× threshold. */
 const RATIO = 1.6;
-
-/**
- * The one expected console line is the 401 of GET /api/auth/me for a signed-out visitor; the
- * technician's deliberately broken log adds the browser's own line for that 400.
- */
-function failOnConsoleErrors(page: Page, allowed = /status of 401/) {
-  const errors: string[] = [];
-  page.on("console", (msg) => {
-    if (msg.type() === "error" && !allowed.test(msg.text())) errors.push(msg.text());
-  });
-  page.on("pageerror", (error) => errors.push(error.message));
-  return errors;
-}
-
-async function signIn(page: Page, email: string) {
-  await page.goto("/sign-in");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password", { exact: true }).fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page.getByRole("heading", { level: 1, name: /^Welcome, / })).toBeVisible();
-}
 
 /** A small seeded generator, so the invented log is the same on every run. */
 function noise(seed: number) {

@@ -1,28 +1,12 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test } from "@playwright/test";
+import { failOnConsoleErrors, signIn } from "../support/browser";
 
 // The seeded demo organization (server/db/seed/demo.ts): one person per role.
-const PASSWORD = "frostfold-demo";
 const ENGINEER = "engineer@kestrelbay.example";
 const OWNER = "owner@kestrelbay.example";
 const VIEWER = "viewer@kestrelbay.example";
 
 // The one expected console line: the 401 GET /api/auth/me answers a signed-out visitor.
-function failOnConsoleErrors(page: Page) {
-  const errors: string[] = [];
-  page.on("console", (msg) => {
-    if (msg.type() === "error" && !/status of 401/.test(msg.text())) errors.push(msg.text());
-  });
-  page.on("pageerror", (error) => errors.push(error.message));
-  return errors;
-}
-
-async function signIn(page: Page, email: string) {
-  await page.goto("/sign-in");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password", { exact: true }).fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await expect(page.getByRole("heading", { level: 1, name: /^Welcome, / })).toBeVisible();
-}
 
 test("an engineer proposes a reflector, the owner approves it, and its emissivity chart is drawn", async ({ page, browser }) => {
   const name = `Test aluminized polyester film, double-sided ${Date.now()}`;

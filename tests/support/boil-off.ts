@@ -1,9 +1,11 @@
 import { createHash } from "node:crypto";
 import type supertest from "supertest";
 import { expect } from "vitest";
-import { DesignDetailSchema, type DesignContentInput } from "../../shared/schemas/design";
+import { DesignDetailSchema } from "../../shared/schemas/design";
 import { TestDetailSchema, type TestDetail } from "../../shared/schemas/boil-off-test";
+import { gaussianNoise } from "../../shared/seeded-noise";
 import { countRows } from "./database";
+import { panelContent } from "./designs";
 import type { TestApp } from "./test-app";
 
 /**
@@ -13,24 +15,8 @@ import type { TestApp } from "./test-app";
  */
 export type Agent = ReturnType<TestApp["agent"]>;
 
-async function ref(agent: Agent, materialId: string) {
-  const res = await agent.get(`/api/materials/${materialId}`);
-  expect(res.status).toBe(200);
-  return { materialId, version: res.body.currentVersion as number };
-}
 
-/** A flat 2 m² panel between a 300 K wall and a cryogen bath, one radiation block: one stage with a cryogen. */
-export async function panelContent(agent: Agent, options: { cryogen?: "nitrogen" | "helium"; layers?: number; capacity_L?: number } = {}): Promise<DesignContentInput> {
-  const steel = await ref(agent, "seed-wall-ss304-polished");
-  const cryogen = await ref(agent, options.cryogen === "helium" ? "seed-cryogen-helium-4" : "seed-cryogen-nitrogen");
-  return {
-    geometry: { kind: "planar", area_m2: 2 },
-    warm: { temperature_K: 300, finish: steel },
-    cold: { cryogen, finish: steel, capacity_L: options.capacity_L ?? 100 },
-    layup: [{ kind: "block", layers: options.layers ?? 10, reflector: await ref(agent, "seed-reflector-al-polyester"), layerDensity_per_cm: 20, model: "radiation" }],
-    vacuum: { pressure_Pa: 1e-4, gas: options.cryogen === "helium" ? "helium" : "nitrogen" },
-  };
-}
+export { panelContent };
 
 /** Creates a design through the API (as whoever `agent` is) and returns it with its cold stage's predicted heat. */
 export async function createDesign(agent: Agent, name = "Test panel", options: Parameters<typeof panelContent>[1] = {}) {
@@ -47,17 +33,8 @@ export async function createTest(agent: Agent, body: Record<string, unknown>): P
   return TestDetailSchema.parse(res.body);
 }
 
-/** mulberry32 with Box–Muller: the same invented noise on every run. */
-export function gaussian(seed: number) {
-  let a = seed >>> 0;
-  const uniform = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = Math.imul(a ^ (a >>> 15), 1 | a);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-  return () => Math.sqrt(-2 * Math.log(uniform() || 1e-12)) * Math.cos(2 * Math.PI * uniform());
-}
+/** The same invented noise on every run. */
+export const gaussian = gaussianNoise;
 
 export interface WeighingLog {
   csv: string;

@@ -1,4 +1,4 @@
-import { WarningIcon } from "../../../components/ui/icons";
+import { CautionsBox } from "../../../components/ui/cautions-box";
 
 // PRODUCT.md's cautions that bear on a measured boil-off: what the figure can and cannot say,
 // and the hazards of the measurement itself (vented gas, cold surfaces, trapped liquid).
@@ -12,15 +12,5 @@ const CAUTIONS = [
 ];
 
 export function MeasuredCautions() {
-  return (
-    <section aria-labelledby="measured-cautions" className="rounded-md border border-ember-400/60 bg-ember-900/30 p-4 text-sm text-ember-200">
-      <h3 id="measured-cautions" className="flex items-center gap-2 font-semibold">
-        <WarningIcon className="size-4" />
-        Cautions
-      </h3>
-      <ul className="mt-2 list-disc space-y-1 pl-5">
-        {CAUTIONS.map((c) => <li key={c}>{c}</li>)}
-      </ul>
-    </section>
-  );
+  return <CautionsBox cautions={CAUTIONS} />;
 }
