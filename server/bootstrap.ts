@@ -1,5 +1,8 @@
 import type { Server } from "node:http";
 import { createApp } from "./app";
+import { AuthCache } from "./cache/auth-cache";
+import { EstimateMemo } from "./cache/estimate-memo";
+import { LibraryCache } from "./cache/library-cache";
 import { createDb } from "./db/client";
 import { runMigrations } from "./db/migrate";
 import { createSessionStore } from "./db/repositories/sessions";
@@ -15,6 +18,7 @@ export function buildContext(env: Env): { ctx: ServiceContext; close: () => Prom
   const logger = createLogger(env.LOG_LEVEL);
   const { db, pool } = createDb(env.DATABASE_URL);
   const transport = createMailTransport(env);
+  const libraryCache = new LibraryCache();
   const ctx: ServiceContext = {
     db,
     env,
@@ -23,6 +27,9 @@ export function buildContext(env: Env): { ctx: ServiceContext; close: () => Prom
     outbox: undefined as unknown as ServiceContext["outbox"],
     objects: createObjectStore(env),
     clock: () => new Date(),
+    authCache: new AuthCache(),
+    libraryCache,
+    estimateMemo: new EstimateMemo(libraryCache),
   };
   // The sender reads the context's clock each time, so a test that moves the clock moves it too.
   const outbox = createOutboxSender({ db, transport, from: env.MAIL_FROM, logger, clock: () => ctx.clock() });

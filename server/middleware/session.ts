@@ -3,11 +3,20 @@ import { findAccountByUserId } from "../db/repositories/accounts";
 import { unauthenticated } from "../errors";
 import type { ServiceContext } from "../services/context";
 
-/** Reads the session cookie; the role comes from the database on every request, never the cookie. */
+/**
+ * Reads the session cookie; the role comes from the database (or the auth cache, which every
+ * change of role or session clears at once), never from the cookie.
+ */
 export function sessionMiddleware(ctx: ServiceContext): RequestHandler {
   return async (req, res, next) => {
     const sessionId = ctx.sessions.readSessionCookie(req.headers.cookie ?? "");
     if (!sessionId) return next();
+    const known = ctx.authCache.get(sessionId);
+    if (known) {
+      req.auth = known;
+      return next();
+    }
+    const ticket = ctx.authCache.ticket();
     const { session, user } = await ctx.sessions.validateSession(sessionId);
     if (!session) {
       res.append("Set-Cookie", ctx.sessions.createBlankSessionCookie().serialize());
@@ -17,6 +26,7 @@ export function sessionMiddleware(ctx: ServiceContext): RequestHandler {
     const account = await findAccountByUserId(ctx.db, user.id);
     if (account) {
       req.auth = { userId: user.id, organizationId: account.organization.id, role: account.membership.role, sessionId: session.id };
+      ctx.authCache.remember(req.auth, session.expiresAt, ticket);
     }
     next();
   };

@@ -1,4 +1,4 @@
-import { Router } from "express";
+import { Router, type Response } from "express";
 import {
   CompareQuerySchema,
   CreateDesignInputSchema,
@@ -59,15 +59,32 @@ export function designsRouter(ctx: ServiceContext): Router {
   return router;
 }
 
+/** Ready JSON bytes, without res.json's stringify or res.send's ETag (which no POST is ever revalidated by). */
+function sendJsonBytes(res: Response, json: Buffer) {
+  res.setHeader("Content-Type", "application/json; charset=utf-8");
+  res.setHeader("Content-Length", json.length);
+  res.end(json);
+}
+
 /** The stateless estimate behind the live preview, and the side-by-side comparison. */
 export function estimateRouter(ctx: ServiceContext): Router {
   const router = Router();
+  // Answers come from the estimate memo when the same organization sent the same body under the
+  // same library (server/cache/estimate-memo.ts); validation runs whenever the engine does.
   router.post("/estimate", requirePermission("read:design"), async (req, res) => {
-    const { content, sweep } = parseInput(EstimateInputSchema, req.body);
-    res.json(await designs.estimate(ctx, actorOf(req), content, { sweep }));
+    const actor = actorOf(req);
+    const json = await ctx.estimateMemo.answer("estimate", actor.organizationId, req.body, async () => {
+      const { content, sweep } = parseInput(EstimateInputSchema, req.body);
+      return designs.estimate(ctx, actor, content, { sweep });
+    });
+    sendJsonBytes(res, json);
   });
   router.post("/estimate/sweep", requirePermission("read:design"), async (req, res) => {
-    res.json(await designs.sweepEstimate(ctx, actorOf(req), parseInput(SweepInputSchema, req.body)));
+    const actor = actorOf(req);
+    const json = await ctx.estimateMemo.answer("sweep", actor.organizationId, req.body, async () =>
+      designs.sweepEstimate(ctx, actor, parseInput(SweepInputSchema, req.body)),
+    );
+    sendJsonBytes(res, json);
   });
   router.get("/compare", requirePermission("read:design"), async (req, res) => {
     const { ids, price_per_L } = parseInput(CompareQuerySchema, req.query, "query");

@@ -16,6 +16,8 @@ import { invitationsRouter, teamRouter } from "./team";
 /** Every router under /api. */
 export function apiRouter(ctx: ServiceContext): Router {
   const api = Router();
+  // First: the live preview's endpoint takes the most requests by far.
+  api.use(estimateRouter(ctx));
   api.use("/health", healthRouter(ctx));
   api.use("/auth", authRouter(ctx));
   api.use("/team", teamRouter(ctx));
@@ -28,7 +30,6 @@ export function apiRouter(ctx: ServiceContext): Router {
   api.use("/boil-off-tests", boilOffTestsRouter(ctx));
   api.use("/alerts", alertsRouter(ctx));
   api.use("/settings", settingsRouter(ctx));
-  api.use(estimateRouter(ctx));
   api.use(() => {
     throw notFound("API route");
   });

@@ -55,6 +55,7 @@ export async function signIn(ctx: ServiceContext, input: SignInInput): Promise<{
 
 export async function signOut(ctx: ServiceContext, sessionId: string): Promise<void> {
   await ctx.sessions.invalidateSession(sessionId);
+  ctx.authCache.forgetSession(sessionId);
 }
 
 /** Always succeeds for the caller, so nobody can learn which addresses have accounts. */
@@ -88,6 +89,7 @@ export async function confirmPasswordReset(ctx: ServiceContext, input: PasswordR
     return token.userId;
   });
   await ctx.sessions.invalidateUserSessions(userId);
+  ctx.authCache.forgetUser(userId);
 }
 
 export function isDuplicateKey(error: unknown): boolean {

@@ -3,15 +3,23 @@ import type { DesignContent, MaterialRef } from "../../shared/schemas/design";
 import { formatSource } from "../../shared/schemas/material";
 import { findVisibleMaterialVersions } from "../db/repositories/designs";
 import type { Tx } from "../db/client";
+import type { VersionLoader } from "../cache/library-cache";
 
 /**
  * Loads the library versions a design names. Only approved versions of entries this
  * organization can see resolve; a retired entry resolves only where `keep` already held it
- * (an old revision being edited), so retired materials stay out of new designs.
+ * (an old revision being edited), so retired materials stay out of new designs. The live
+ * preview passes the library cache's loader; saves read the database in their transaction.
  */
-export async function resolveDesignMaterials(db: Tx, organizationId: string, content: DesignContent, keep: Set<string> = new Set()) {
+export async function resolveDesignMaterials(
+  db: Tx,
+  organizationId: string,
+  content: DesignContent,
+  keep: Set<string> = new Set(),
+  load: VersionLoader = findVisibleMaterialVersions,
+) {
   const refs = materialRefsOf(content);
-  const rows = await findVisibleMaterialVersions(db, organizationId, refs);
+  const rows = await load(db, organizationId, refs);
   const resolved = new Map<string, ResolvedMaterial>();
   for (const { version: v, material: m } of rows) {
     const key = `${v.materialId}@${v.version}`;

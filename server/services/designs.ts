@@ -19,12 +19,19 @@ import { conflict, invalidInput, notFound } from "../errors";
 import { newId } from "../ids";
 import type { Actor, ServiceContext } from "./context";
 import { resolveDesignMaterials } from "./design-materials";
+import type { VersionLoader } from "../cache/library-cache";
 
 /** Resolves the design's library versions and runs the engine; bad references are a 400 naming the field. */
-export async function predictContent(db: Tx, organizationId: string, content: DesignContent, keep?: Set<string>, options: { sweep?: boolean } = {}) {
-  const { lookup, list } = await resolveDesignMaterials(db, organizationId, content, keep);
+export async function predictContent(
+  db: Tx,
+  organizationId: string,
+  content: DesignContent,
+  keep?: Set<string>,
+  options: { sweep?: boolean; load?: VersionLoader } = {},
+) {
+  const { lookup, list } = await resolveDesignMaterials(db, organizationId, content, keep, options.load);
   try {
-    return { prediction: predictDesign(content, lookup, options), materials: list };
+    return { prediction: predictDesign(content, lookup, { sweep: options.sweep }), materials: list };
   } catch (error) {
     if (error instanceof MaterialReferenceError) throw invalidInput(error.message, [{ path: error.field, message: error.message }]);
     throw error; // ThermalInputError becomes a 400 in the error handler
@@ -32,7 +39,7 @@ export async function predictContent(db: Tx, organizationId: string, content: De
 }
 
 export async function estimate(ctx: ServiceContext, actor: Actor, content: DesignContent, options: { sweep: boolean }) {
-  return predictContent(ctx.db, actor.organizationId, content, undefined, options);
+  return predictContent(ctx.db, actor.organizationId, content, undefined, { ...options, load: ctx.libraryCache.load });
 }
 
 /**
@@ -41,7 +48,7 @@ export async function estimate(ctx: ServiceContext, actor: Actor, content: Desig
  * naming the field; bad references are a 400 naming the form path, as in predictContent.
  */
 export async function sweepEstimate(ctx: ServiceContext, actor: Actor, input: SweepInput): Promise<SweepResult> {
-  const { lookup } = await resolveDesignMaterials(ctx.db, actor.organizationId, input.content);
+  const { lookup } = await resolveDesignMaterials(ctx.db, actor.organizationId, input.content, undefined, ctx.libraryCache.load);
   try {
     const assembly = toAssembly(input.content, lookup);
     const plan = sweepPlanOf(assembly, input.variable, input.blockIndex);

@@ -117,6 +117,7 @@ export async function importMaterialsCsv(ctx: ServiceContext, actor: Actor, buff
     if (isDuplicateKey(error)) throw new AppError(409, "name_taken", "A name in the file was taken while importing. Check the preview again; nothing was changed.");
     throw error;
   }
+  ctx.libraryCache.changed();
   return { result: { imported: created.length, materials: created.map((c) => ({ id: c.id, name: c.material.name })) } };
 }
 

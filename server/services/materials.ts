@@ -171,6 +171,7 @@ export async function createMaterial(ctx: ServiceContext, actor: Actor, input: M
       await audit(tx, actor, "material.create", rows.id, { version: 1, name: input.name, kind: input.properties.kind }, now);
     }),
   );
+  ctx.libraryCache.changed();
   return getMaterial(ctx, actor, rows.id);
 }
 
@@ -207,6 +208,7 @@ export async function proposeVersion(ctx: ServiceContext, actor: Actor, id: stri
       await audit(tx, actor, "material.propose", id, { version, changeNote: input.changeNote }, now);
     }),
   );
+  ctx.libraryCache.changed();
   return getMaterial(ctx, actor, id);
 }
 
@@ -234,6 +236,7 @@ export async function replaceDraft(ctx: ServiceContext, actor: Actor, id: string
       await audit(tx, actor, "material.edit_draft", id, { version }, now);
     }),
   );
+  ctx.libraryCache.changed();
   return getMaterial(ctx, actor, id);
 }
 
@@ -263,6 +266,7 @@ export async function decideDraft(ctx: ServiceContext, actor: Actor, id: string,
       await audit(tx, actor, input.decision === "approve" ? "material.approve" : "material.reject", id, { version, comment }, now);
     }),
   );
+  ctx.libraryCache.changed();
   return getMaterial(ctx, actor, id);
 }
 
@@ -280,6 +284,7 @@ export async function retireMaterial(ctx: ServiceContext, actor: Actor, id: stri
     await repo.updateMaterial(tx, actor.organizationId, id, { status: "retired", draftVersion: null, retiredAt: now, retiredByUserId: actor.userId, retireComment: comment, updatedAt: now });
     await audit(tx, actor, "material.retire", id, { version: material.currentVersion, comment, closedDraft: material.draftVersion }, now);
   });
+  ctx.libraryCache.changed();
   return getMaterial(ctx, actor, id);
 }
 
@@ -305,6 +310,7 @@ export async function copyMaterial(ctx: ServiceContext, actor: Actor, id: string
       await audit(tx, actor, "material.copy", rows.id, { fromMaterialId: id, fromVersion: input.version, name: newName }, now);
     }),
   );
+  ctx.libraryCache.changed();
   return getMaterial(ctx, actor, rows.id);
 }
 

@@ -41,8 +41,8 @@ export async function changeMemberRole(ctx: ServiceContext, actor: Actor, userId
     await insertAuditEntry(tx, actor.organizationId, { actorUserId: actor.userId, action: "member.role_change", entityType: "user", entityId: userId, detail: { from: member.role, to: role } }, now);
     return { ...member, role };
   });
-  // A demoted member keeps no session that carries the old role's reach beyond the next request:
-  // the role is read from the database on every request, so nothing else to do here.
+  // A demoted member keeps no session that carries the old role's reach beyond the next request.
+  ctx.authCache.forgetUser(userId);
   return toMember(updated);
 }
 
@@ -56,6 +56,7 @@ export async function removeMember(ctx: ServiceContext, actor: Actor, userId: st
     await insertAuditEntry(tx, actor.organizationId, { actorUserId: actor.userId, action: "member.remove", entityType: "user", entityId: userId, detail: { email: member.email } }, now);
   });
   await ctx.sessions.invalidateUserSessions(userId);
+  ctx.authCache.forgetUser(userId);
 }
 
 export async function inviteMember(ctx: ServiceContext, actor: Actor, input: InviteInput): Promise<Invitation> {

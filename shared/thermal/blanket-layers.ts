@@ -192,12 +192,13 @@ function gapModel(v: Validated) {
       // dR/dT = −ε′/ε²; the wall faces sit at fixed temperatures, so only shields move.
       const dRu = g === 0 ? 0 : -emissivitySlope(upper, a, eu) / (eu * eu);
       const dRl = g === n ? 0 : -emissivitySlope(lower, b, el) / (el * el);
-      const solid = spacerTerm(v.spacer, a, b, drop);
-      let dWarm = (4 * SIGMA * a * a * a - rad * dRu) / r + solid.dWarm;
-      let dCold = (-4 * SIGMA * b * b * b - rad * dRl) / r + solid.dCold;
-      let heat = rad + solid.heat;
+      // The spacer's terms as in spacerTerm, written out: this loop runs in every Newton step.
+      const { constant, perKelvin } = v.spacer;
+      let dWarm = (4 * SIGMA * a * a * a - rad * dRu) / r + constant + perKelvin * a;
+      let dCold = (-4 * SIGMA * b * b * b - rad * dRl) / r - (constant + perKelvin * b);
+      let heat = rad + (constant + (perKelvin * (a + b)) / 2) * drop;
       if (v.gas !== undefined && v.gas.perAccommodation > 0) {
-        const gas = gasTerm(v.gas, a, b, drop);
+        const gas = gasTerm(v.gas, a, b, drop, gasScratch);
         heat += gas.heat;
         dWarm += gas.dWarm;
         dCold += gas.dCold;
@@ -209,17 +210,25 @@ function gapModel(v: Validated) {
   };
 }
 
-/** G·P·a(T_a, T_b)·(T_a − T_b) with a = a_c·a_h/(a_h + a_c − a_c·a_h) and its derivatives (∂a/∂a_h = a_c²/D², ∂a/∂a_c = a_h²/D²). */
-function gasTerm(gas: NonNullable<Validated["gas"]>, a: number, b: number, drop: number) {
-  const hot = gas.fixed ? { value: gas.fixed.warm, slope: 0 } : accommodationAt(gas.table, a);
-  const cold = gas.fixed ? { value: gas.fixed.cold, slope: 0 } : accommodationAt(gas.table, b);
+type GasTerm = { heat: number; dWarm: number; dCold: number };
+// Reused by the Newton loop so it allocates nothing per gap (the solve is not re-entrant).
+const gasScratch: GasTerm = { heat: 0, dWarm: 0, dCold: 0 };
+const hotScratch = { value: 0, slope: 0 };
+const coldScratch = { value: 0, slope: 0 };
+
+/**
+ * G·P·a(T_a, T_b)·(T_a − T_b) with a = a_c·a_h/(a_h + a_c − a_c·a_h) and its derivatives
+ * (∂a/∂a_h = a_c²/D², ∂a/∂a_c = a_h²/D²), written into `out` (a new object without it).
+ */
+function gasTerm(gas: NonNullable<Validated["gas"]>, a: number, b: number, drop: number, out: GasTerm = { heat: 0, dWarm: 0, dCold: 0 }): GasTerm {
+  const hot = gas.fixed ? { value: gas.fixed.warm, slope: 0 } : accommodationAt(gas.table, a, hotScratch);
+  const cold = gas.fixed ? { value: gas.fixed.cold, slope: 0 } : accommodationAt(gas.table, b, coldScratch);
   const d = hot.value + cold.value - cold.value * hot.value;
   const overall = (cold.value * hot.value) / d;
-  return {
-    heat: gas.perAccommodation * overall * drop,
-    dWarm: gas.perAccommodation * (overall + (drop * cold.value * cold.value * hot.slope) / (d * d)),
-    dCold: gas.perAccommodation * (-overall + (drop * hot.value * hot.value * cold.slope) / (d * d)),
-  };
+  out.heat = gas.perAccommodation * overall * drop;
+  out.dWarm = gas.perAccommodation * (overall + (drop * cold.value * cold.value * hot.slope) / (d * d));
+  out.dCold = gas.perAccommodation * (-overall + (drop * hot.value * hot.value * cold.slope) / (d * d));
+  return out;
 }
 
 /**

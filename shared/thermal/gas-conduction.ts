@@ -145,17 +145,21 @@ export function defaultAccommodation(gas: GasName, temperature_K: number): numbe
   return accommodationAt(points, temperature_K).value;
 }
 
-/** Unchecked table lookup with its slope, for the layer-by-layer Newton solve. */
-export function accommodationAt(points: [number, number][], temperature_K: number): { value: number; slope: number } {
+/** Unchecked table lookup with its slope, for the layer-by-layer Newton solve; fills `out` when given, so the loop allocates nothing. */
+export function accommodationAt(points: [number, number][], temperature_K: number, out = { value: 0, slope: 0 }): { value: number; slope: number } {
   const last = points.length - 1;
-  if (temperature_K <= points[0][0]) return { value: points[0][1], slope: 0 };
-  if (temperature_K >= points[last][0]) return { value: points[last][1], slope: 0 };
-  let i = 0;
-  while (points[i + 1][0] < temperature_K) i++;
-  const [t0, a0] = points[i];
-  const [t1, a1] = points[i + 1];
-  const slope = (a1 - a0) / (t1 - t0);
-  return { value: a0 + slope * (temperature_K - t0), slope };
+  out.slope = 0;
+  if (temperature_K <= points[0][0]) out.value = points[0][1];
+  else if (temperature_K >= points[last][0]) out.value = points[last][1];
+  else {
+    let i = 0;
+    while (points[i + 1][0] < temperature_K) i++;
+    const t0 = points[i][0];
+    const a0 = points[i][1];
+    out.slope = (points[i + 1][1] - a0) / (points[i + 1][0] - t0);
+    out.value = a0 + out.slope * (temperature_K - t0);
+  }
+  return out;
 }
 
 export function requireGas(field: string, gas: unknown): GasName {

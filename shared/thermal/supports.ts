@@ -154,11 +154,23 @@ export function conductivityIntegral(material: SupportMaterial, cold_K: number, 
   const warm = requireFitTemperature("warm_K", warm_K, fit);
   if (warm < cold) throw new ThermalInputError("warm_K", warm, `a temperature at or above cold_K (${cold} K)`);
   if (warm === cold) return 0;
+  const key = `${material}|${cold}|${warm}`;
+  const known = integrals.get(key);
+  if (known !== undefined) return known;
   const min = fit.validRange_K[0];
   const below = cold < min ? conductivity(fit, min) * (min - cold) : 0;
   const from = Math.max(cold, min);
-  return below + (warm > from ? adaptiveSimpson((t) => conductivity(fit, t), from, warm, 1e-10) : 0);
+  const integral = below + (warm > from ? adaptiveSimpson((t) => conductivity(fit, t), from, warm, 1e-10) : 0);
+  if (integrals.size >= INTEGRALS_KEPT) integrals.clear();
+  integrals.set(key, integral);
+  return integral;
 }
+
+// The fits are fixed, so an integral between two temperatures never changes: sweeps and bands
+// re-solve the blanket many times between the same stage temperatures, and quadrature to 1e-10
+// is the costly part of a support. A bounded memo, emptied when full.
+const INTEGRALS_KEPT = 1024;
+const integrals = new Map<string, number>();
 
 export interface SupportConductionInput {
   material: SupportMaterial;

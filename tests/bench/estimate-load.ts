@@ -2,7 +2,10 @@
  * Load benchmark of POST /api/estimate (the live preview), beside a bare Express JSON endpoint
  * in the same process and run, so the ratio shows what sessions, validation and the engine cost.
  * Two bodies, as the design page sends them on every edit: the quick figures (sweep: false) and
- * the whole prediction with its layer-count sweep.
+ * the whole prediction with its layer-count sweep. Repeated bodies are answered by the estimate
+ * memo (server/cache/estimate-memo.ts), so two more runs send a new warm temperature on every
+ * request and show what the engine itself costs. The bare endpoint runs before and after the
+ * others; ratios are against the mean of the two, so a machine that slows down mid-run shows.
  * It prints figures and never fails on them (target: ≥ 70 % of the bare endpoint's throughput,
  * p99 ≤ 50 ms). Run through `npm run bench`; its own ports and data folder keep it apart.
  */
@@ -62,21 +65,44 @@ try {
   const barePort = (bareServer.address() as AddressInfo).port;
 
   const request = (b: string) => ({ method: "POST" as const, body: b, headers: { "content-type": "application/json", origin: stack.origin, cookie } });
-  const baseline = await run(`http://127.0.0.1:${barePort}/echo`, request(body));
+  // A body no request has sent before: the warm wall a few microkelvin warmer each time.
+  const content = detail.latest.content as { warm: { temperature_K: number } };
+  let sent = 0;
+  const everNew = (sweep: boolean) => ({
+    ...request(""),
+    requests: [
+      {
+        setupRequest: (r: autocannon.Request) => {
+          sent += 1;
+          const warm = { ...content.warm, temperature_K: content.warm.temperature_K + sent * 1e-6 };
+          return { ...r, body: JSON.stringify({ content: { ...content, warm }, sweep }) };
+        },
+      },
+    ],
+  });
+  const bareBefore = await run(`http://127.0.0.1:${barePort}/echo`, request(body));
   const figures = await run(`${stack.origin}/api/estimate`, request(figuresBody));
   const estimate = await run(`${stack.origin}/api/estimate`, request(body));
+  const figuresComputed = await run(`${stack.origin}/api/estimate`, everNew(false));
+  const estimateComputed = await run(`${stack.origin}/api/estimate`, everNew(true));
+  const bareAfter = await run(`http://127.0.0.1:${barePort}/echo`, request(body));
   bareServer.close();
   // autocannon stops on the clock, not on its last answers: let those land before the stack stops.
   await new Promise((resolve) => setTimeout(resolve, 1500));
 
-  const failures = estimate.non2xx + estimate.errors + figures.non2xx + figures.errors;
+  const runs = [figures, estimate, figuresComputed, estimateComputed];
+  const failures = runs.reduce((sum, r) => sum + r.non2xx + r.errors, 0);
+  const bareMean = (bareBefore.requests.average + bareAfter.requests.average) / 2;
   const line = (name: string, r: Result) =>
-    `${name.padEnd(22)} ${r.requests.average.toFixed(0).padStart(7)} req/s   p50 ${String(r.latency.p50).padStart(4)} ms   p99 ${String(r.latency.p99).padStart(4)} ms`;
+    `${name.padEnd(27)} ${r.requests.average.toFixed(0).padStart(7)} req/s   p50 ${String(r.latency.p50).padStart(4)} ms   p99 ${String(r.latency.p99).padStart(4)} ms`;
   console.log(`\nPOST /api/estimate load (${CONNECTIONS} connections, ${DURATION_S} s each, body ${body.length} bytes)`);
-  const ratio = (r: Result) => `${((r.requests.average / baseline.requests.average) * 100).toFixed(1)} %`;
-  console.log(line("bare Express JSON", baseline));
-  console.log(line("estimate, figures", figures) + `   ratio ${ratio(figures)}`);
-  console.log(line("estimate, with sweep", estimate) + `   ratio ${ratio(estimate)}`);
+  const ratio = (r: Result) => `${((r.requests.average / bareMean) * 100).toFixed(1)} %`;
+  console.log(line("bare Express JSON, before", bareBefore));
+  console.log(line("bare Express JSON, after", bareAfter));
+  console.log(line("figures, repeated body", figures) + `   ratio ${ratio(figures)}`);
+  console.log(line("with sweep, repeated body", estimate) + `   ratio ${ratio(estimate)}`);
+  console.log(line("figures, new body each", figuresComputed) + `   ratio ${ratio(figuresComputed)}`);
+  console.log(line("with sweep, new body each", estimateComputed) + `   ratio ${ratio(estimateComputed)}`);
   console.log(`targets: ≥ 70 % of the bare endpoint, p99 ≤ 50 ms; failed requests ${failures}`);
   if (failures > 0) process.exitCode = 1;
 } finally {
