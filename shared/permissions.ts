@@ -22,8 +22,10 @@ export const ACTIONS = [
   "comment:test",
   "delete:test",
   "acknowledge:alert",
-  /** Alert e-mails: owners always, engineers for the designs they created or revised. */
+  /** Alert e-mails for the designs one created or revised. */
   "receive:alert-mail",
+  /** Alert e-mails for every design of the organization. */
+  "receive:every-alert-mail",
   "edit:settings",
 ] as const;
 export type Action = (typeof ACTIONS)[number];

@@ -39,5 +39,18 @@ test("the engineer draws the cryostat's heat leak against layer density, warm wa
     await expect(chart.locator(".recharts-line-curve").first()).toHaveAttribute("d", /^M[\d.]+,[\d.]+C/);
     await expect(chart.getByText("this design")).toBeVisible();
   }
+
+  // Layer density of another block: the outer blanket, outside the nitrogen-cooled shield.
+  await pick.selectOption({ label: "Layer density" });
+  const block = results.getByLabel("Block", { exact: true });
+  await expect(block).toHaveValue("");
+  await block.selectOption({ label: "Block 1 (Outer blanket)" });
+  const outer = results.getByRole("img", { name: /and each stage against layer density of outer blanket, .* layers\/cm/ });
+  await expect(outer).toBeVisible();
+  await expect(outer.locator(".recharts-line-curve")).toHaveCount(2);
+  await expect(results.getByText("This design: 20 layers/cm")).toBeVisible();
+  // The server's own choice again: the block facing the vessel.
+  await block.selectOption({ label: "Thickest block facing the vessel" });
+  await expect(results.getByRole("img", { name: /against layer density of inner blanket/ })).toBeVisible();
   expect(errors).toEqual([]);
 });

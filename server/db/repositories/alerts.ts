@@ -1,5 +1,5 @@
 import { and, asc, desc, eq, inArray, isNotNull, isNull } from "drizzle-orm";
-import { rolesThatCan } from "../../../shared/permissions";
+import { can, rolesThatCan } from "../../../shared/permissions";
 import type { Tx } from "../client";
 import { alerts, boilOffTests, designRevisions, designs, memberships, users } from "../schema";
 
@@ -53,8 +53,9 @@ export async function acknowledgeAlert(db: Tx, organizationId: string, id: strin
 }
 
 /**
- * Who is told about an alert: the organization's owners, and the design's engineers: members
- * who are engineers now and created the design or saved one of its revisions.
+ * Who is told about an alert (shared/permissions.ts): members whose role receives every alert
+ * mail (owners), and members whose role receives alert mail and who created the design or saved
+ * one of its revisions (the design's engineers); each only while their own switch is on.
  */
 export async function listAlertRecipients(db: Tx, organizationId: string, designId: string) {
   const authors = db
@@ -74,5 +75,5 @@ export async function listAlertRecipients(db: Tx, organizationId: string, design
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(and(eq(memberships.organizationId, organizationId), inArray(memberships.role, rolesThatCan("receive:alert-mail")), eq(users.alertEmails, true)))
     .orderBy(asc(users.email));
-  return members.filter((m) => m.role === "owner" || authorIds.has(m.userId)).map(({ email, name, role }) => ({ email, name, role }));
+  return members.filter((m) => can(m.role, "receive:every-alert-mail") || authorIds.has(m.userId)).map(({ email, name, role }) => ({ email, name, role }));
 }

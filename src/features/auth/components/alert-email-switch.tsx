@@ -1,3 +1,4 @@
+import { useState } from "react";
 import { ErrorIcon } from "../../../components/ui/icons";
 import { useUpdatePreferences } from "../api/update-preferences";
 
@@ -7,7 +8,10 @@ import { useUpdatePreferences } from "../api/update-preferences";
  */
 export function AlertEmailSwitch({ current, receivesAlerts }: { current: boolean; receivesAlerts: boolean }) {
   const update = useUpdatePreferences();
-  const shown = update.isPending && update.variables.alertEmails !== undefined ? update.variables.alertEmails : current;
+  // The box follows the click at once (React state set in the event itself; the mutation's own
+  // state reaches the screen a task later), and goes back to the saved value if the save fails.
+  const [asked, setAsked] = useState<boolean | null>(null);
+  const shown = asked ?? current;
   if (!receivesAlerts) {
     return <p className="text-sm text-ink-300">Alert e-mails go to the owners and to the engineers of the design a test belongs to; your role receives none.</p>;
   }
@@ -19,7 +23,10 @@ export function AlertEmailSwitch({ current, receivesAlerts }: { current: boolean
           className="mt-0.5 accent-frost-400"
           checked={shown}
           disabled={update.isPending}
-          onChange={(event) => update.mutate({ alertEmails: event.target.checked })}
+          onChange={(event) => {
+            setAsked(event.target.checked);
+            update.mutate({ alertEmails: event.target.checked }, { onSettled: () => setAsked(null) });
+          }}
         />
         <span>E-mail me when an accepted boil-off test exceeds the alert threshold</span>
       </label>

@@ -39,7 +39,12 @@ export function MoreSweeps({ accepted }: { accepted: boolean }) {
   const [lastAccepted, setLastAccepted] = useState<string | null>(accepted ? key : null);
   if (accepted && key !== null && key !== lastAccepted) setLastAccepted(key);
   const settledKey = useDebouncedValue(lastAccepted, DEBOUNCE_MS);
-  const sweep = useSweep(settledKey, variable);
+  // Layer density belongs to one block: the server picks the thickest facing the vessel unless
+  // the user names another. A choice the layup no longer has falls back to the server's.
+  const [chosenBlock, setChosenBlock] = useState<number | undefined>(undefined);
+  const blocks = sweepableBlocks(useWatch({ control, name: "layup" }));
+  const blockIndex = variable === "layer-density" && blocks.some((b) => b.index === chosenBlock) ? chosenBlock : undefined;
+  const sweep = useSweep(settledKey, variable, blockIndex);
   const data = sweep.data;
   const loadingOther = data !== undefined && (sweep.isPlaceholderData || data.variable !== variable);
 
@@ -55,6 +60,18 @@ export function MoreSweeps({ accepted }: { accepted: boolean }) {
             ))}
           </SelectField>
         </div>
+        {variable === "layer-density" && blocks.length > 1 ? (
+          <div className="w-64">
+            <SelectField label="Block" value={blockIndex === undefined ? "" : String(blockIndex)} onChange={(e) => setChosenBlock(e.target.value === "" ? undefined : Number(e.target.value))}>
+              <option value="">Thickest block facing the vessel</option>
+              {blocks.map((b) => (
+                <option key={b.index} value={b.index}>
+                  {b.label}
+                </option>
+              ))}
+            </SelectField>
+          </div>
+        ) : null}
         {loadingOther && !sweep.isError ? <p className="text-xs text-ink-300">Updating the sweep…</p> : null}
       </div>
       {sweep.isError ? (
@@ -70,6 +87,17 @@ export function MoreSweeps({ accepted }: { accepted: boolean }) {
       )}
     </div>
   );
+}
+
+/** The layup's blocks that have a layer density to sweep (correlation or layers), named as the layup editor names them. */
+function sweepableBlocks(layup: DesignContentInput["layup"] | undefined): { index: number; label: string }[] {
+  let blockNo = 0;
+  return (layup ?? []).flatMap((item, index) => {
+    if (item?.kind !== "block") return [];
+    blockNo += 1;
+    const named = item.label?.trim();
+    return item.model === "radiation" ? [] : [{ index, label: `Block ${blockNo}${named ? ` (${named})` : ""}` }];
+  });
 }
 
 /** Decades that fall inside [lo, hi], for a log axis. */
