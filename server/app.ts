@@ -1,13 +1,13 @@
 import express from "express";
 import helmet from "helmet";
-import { pinoHttp } from "pino-http";
-import { randomUUID } from "node:crypto";
 import { existsSync } from "node:fs";
 import path from "node:path";
 import { errorHandler } from "./middleware/error-handler";
+import { requestLog } from "./middleware/request-log";
 import { sameOrigin } from "./middleware/same-origin";
 import { sessionMiddleware } from "./middleware/session";
 import { apiRouter } from "./routes";
+import { estimateRouter } from "./routes/designs";
 import type { ServiceContext } from "./services/context";
 
 /**
@@ -20,17 +20,7 @@ export function createApp(ctx: ServiceContext) {
   app.disable("x-powered-by");
   app.set("trust proxy", "loopback");
 
-  app.use(
-    pinoHttp({
-      logger: ctx.logger,
-      genReqId: (req, res) => {
-        const id = randomUUID();
-        res.setHeader("X-Request-Id", id);
-        return id;
-      },
-      autoLogging: { ignore: (req) => req.url === "/api/health" },
-    }),
-  );
+  app.use(requestLog(ctx.logger, { ignore: (url) => url === "/api/health" }));
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -40,6 +30,8 @@ export function createApp(ctx: ServiceContext) {
     }),
   );
   app.use("/api", sameOrigin([ctx.env.APP_ORIGIN]));
+  // The live preview takes most requests by far; it reads its own body and session (routes/designs.ts).
+  app.use("/api", estimateRouter(ctx));
   app.use("/api", express.json({ limit: "1mb" }));
   app.use("/api", sessionMiddleware(ctx));
   app.use("/api", apiRouter(ctx));

@@ -36,7 +36,7 @@ describe("EstimateMemo", () => {
     const library = new LibraryCache();
     const memo = new EstimateMemo(library);
     let computed = 0;
-    const ask = (body: unknown, org = "o1") => memo.answer("estimate", org, body, async () => ({ n: ++computed }));
+    const ask = (body: unknown, org = "o1") => memo.answer("estimate", org, JSON.stringify(body), async () => ({ n: ++computed }));
     const first = JSON.parse((await ask({ a: 1 })).toString());
     expect(JSON.parse((await ask({ a: 1 })).toString())).toEqual(first);
     expect(computed).toBe(1);
@@ -50,14 +50,14 @@ describe("EstimateMemo", () => {
   it("shares one computation between identical requests in flight and keeps no failure", async () => {
     const memo = new EstimateMemo(new LibraryCache());
     let computed = 0;
-    const slow = () => memo.answer("estimate", "o1", { a: 1 }, async () => {
+    const slow = () => memo.answer("estimate", "o1", '{"a":1}', async () => {
       computed += 1;
       await new Promise((r) => setTimeout(r, 10));
       return { ok: true };
     });
     await Promise.all([slow(), slow(), slow()]);
     expect(computed).toBe(1);
-    const failing = () => memo.answer("estimate", "o1", { bad: true }, async () => {
+    const failing = () => memo.answer("estimate", "o1", '{"bad":true}', async () => {
       computed += 1;
       throw new Error("layup.0.layers must be at most 200");
     });

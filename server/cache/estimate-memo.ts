@@ -2,7 +2,8 @@ import { LRUCache } from "lru-cache";
 import type { LibraryCache } from "./library-cache";
 
 /**
- * The live preview's answers, as the JSON bytes sent, per organization and exact request body. The
+ * The live preview's answers, as the JSON bytes sent, per organization and exact request body
+ * text (the route reads it unparsed, so a known body is never parsed at all). The
  * engine is a pure function of the body and the library versions it names, so an answer stays
  * right until the library changes (the library cache's version is part of every entry). The
  * preview asks the same question often: every viewer opening a saved design, a refetch when a
@@ -16,11 +17,13 @@ export class EstimateMemo {
     private readonly library: LibraryCache,
     options: { max?: number } = {},
   ) {
-    this.entries = new LRUCache({ max: options.max ?? 500 });
+    // Bounded by count and by size: a key holds a whole body (up to the 1 MB body limit), and an
+    // answer is some 10 to 40 kB, counted here before it is known.
+    this.entries = new LRUCache({ max: options.max ?? 500, maxSize: 64 * 1024 * 1024, sizeCalculation: (_entry, key) => key.length + 64 * 1024 });
   }
 
-  answer(route: string, organizationId: string, body: unknown, compute: () => Promise<unknown>): Promise<Buffer> {
-    const key = `${route}|${organizationId}|${JSON.stringify(body)}`;
+  answer(route: string, organizationId: string, bodyText: string, compute: () => Promise<unknown>): Promise<Buffer> {
+    const key = `${route}|${organizationId}|${bodyText}`;
     const libraryVersion = this.library.version;
     const known = this.entries.get(key);
     if (known && known.libraryVersion === libraryVersion) return known.json;

@@ -23,6 +23,6 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   if (type === "entity.too.large" || status === 413) return send(413, { code: "too_large", message: "The request body is too large." });
   if (error?.code === "LIMIT_FILE_SIZE") return send(413, { code: "too_large", message: "The file is larger than the upload limit." });
 
-  req.log?.error({ err: error }, "unhandled error");
+  req.log?.error({ err: error, reqId: requestId }, "unhandled error");
   return send(500, { code: "internal", message: `Something went wrong on our side. Quote request id ${requestId} if you report it.`, requestId });
 };

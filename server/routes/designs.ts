@@ -1,4 +1,4 @@
-import { Router, type Response } from "express";
+import express, { Router, type RequestHandler, type Response } from "express";
 import {
   CompareQuerySchema,
   CreateDesignInputSchema,
@@ -10,10 +10,12 @@ import {
   SaveRevisionInputSchema,
   SweepInputSchema,
 } from "../../shared/schemas/design";
+import { AppError } from "../errors";
 import { actorOf, requirePermission } from "../middleware/require-permission";
+import { sessionMiddleware } from "../middleware/session";
 import { parseInput } from "../middleware/validate";
 import { compareDesigns } from "../services/compare";
-import type { ServiceContext } from "../services/context";
+import type { Actor, ServiceContext } from "../services/context";
 import * as designs from "../services/designs";
 import { revisionReport } from "../services/reports";
 
@@ -66,29 +68,54 @@ function sendJsonBytes(res: Response, json: Buffer) {
   res.end(json);
 }
 
-/** The stateless estimate behind the live preview, and the side-by-side comparison. */
+/**
+ * The stateless estimate behind the live preview. It is mounted before the API's JSON body parser
+ * and session (server/app.ts) and reads the body as text, so a body the estimate memo has
+ * answered for this organization under this library is never parsed; validation runs whenever
+ * the engine does.
+ */
 export function estimateRouter(ctx: ServiceContext): Router {
   const router = Router();
-  // Answers come from the estimate memo when the same organization sent the same body under the
-  // same library (server/cache/estimate-memo.ts); validation runs whenever the engine does.
-  router.post("/estimate", requirePermission("read:design"), async (req, res) => {
-    const actor = actorOf(req);
-    const json = await ctx.estimateMemo.answer("estimate", actor.organizationId, req.body, async () => {
-      const { content, sweep } = parseInput(EstimateInputSchema, req.body);
+  const before = [express.text({ type: "application/json", limit: "1mb" }), sessionMiddleware(ctx), requirePermission("read:design")];
+  const answer =
+    (route: string, compute: (actor: Actor, body: unknown) => Promise<unknown>): RequestHandler =>
+    async (req, res) => {
+      const actor = actorOf(req);
+      const text = typeof req.body === "string" ? req.body : "";
+      sendJsonBytes(res, await ctx.estimateMemo.answer(route, actor.organizationId, text, () => compute(actor, parseJsonText(text))));
+    };
+  router.post(
+    "/estimate",
+    ...before,
+    answer("estimate", (actor, body) => {
+      const { content, sweep } = parseInput(EstimateInputSchema, body);
       return designs.estimate(ctx, actor, content, { sweep });
-    });
-    sendJsonBytes(res, json);
-  });
-  router.post("/estimate/sweep", requirePermission("read:design"), async (req, res) => {
-    const actor = actorOf(req);
-    const json = await ctx.estimateMemo.answer("sweep", actor.organizationId, req.body, async () =>
-      designs.sweepEstimate(ctx, actor, parseInput(SweepInputSchema, req.body)),
-    );
-    sendJsonBytes(res, json);
-  });
+    }),
+  );
+  router.post(
+    "/estimate/sweep",
+    ...before,
+    answer("sweep", (actor, body) => designs.sweepEstimate(ctx, actor, parseInput(SweepInputSchema, body))),
+  );
+  return router;
+}
+
+/** The side-by-side comparison of saved designs and revisions. */
+export function compareRouter(ctx: ServiceContext): Router {
+  const router = Router();
   router.get("/compare", requirePermission("read:design"), async (req, res) => {
     const { ids, price_per_L } = parseInput(CompareQuerySchema, req.query, "query");
     res.json(await compareDesigns(ctx, actorOf(req), ids, price_per_L));
   });
   return router;
+}
+
+/** An empty body reads as {} (so validation names the missing fields), as the JSON parser does. */
+function parseJsonText(text: string): unknown {
+  if (text.trim() === "") return {};
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new AppError(400, "invalid_json", "The request body is not valid JSON.");
+  }
 }

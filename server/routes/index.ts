@@ -6,18 +6,17 @@ import { authRouter } from "./auth";
 import { boilOffTestsRouter } from "./boil-off-tests";
 import { calibrationRouter } from "./calibration";
 import { cryogensRouter } from "./cryogens";
-import { designsRouter, estimateRouter } from "./designs";
+import { compareRouter, designsRouter } from "./designs";
 import { healthRouter } from "./health";
 import { materialsRouter } from "./materials";
 import { outboxRouter } from "./outbox";
 import { settingsRouter } from "./settings";
 import { invitationsRouter, teamRouter } from "./team";
 
-/** Every router under /api. */
+/** Every router under /api but the live preview's estimate, which app.ts mounts first. */
 export function apiRouter(ctx: ServiceContext): Router {
   const api = Router();
-  // First: the live preview's endpoint takes the most requests by far.
-  api.use(estimateRouter(ctx));
+  api.use(compareRouter(ctx));
   api.use("/health", healthRouter(ctx));
   api.use("/auth", authRouter(ctx));
   api.use("/team", teamRouter(ctx));

@@ -167,6 +167,26 @@ describe("duplicate, estimate, compare and report", () => {
     expect(fields[0].message).toMatch(/layup\[1\]\.temperature_K/);
   });
 
+  it("reads the estimate body itself: bad JSON, no body and a bad origin are refused as everywhere else", async () => {
+    const agent = await t.signInAs("engineer");
+    const malformed = await agent.post("/api/estimate").set("Content-Type", "application/json").send('{"content": {');
+    expect(malformed.status).toBe(400);
+    expect(malformed.body.error.code).toBe("invalid_json");
+    // No JSON body at all reads as {}: validation names the missing field.
+    const empty = await agent.post("/api/estimate").set("Content-Type", "text/plain").send("hello");
+    expect(empty.status).toBe(400);
+    expect(empty.body.error.fields.map((f: { path: string }) => f.path)).toEqual(["content"]);
+    // The same design in other whitespace is the same question: the same answer.
+    const content = await panel();
+    const compact = await agent.post("/api/estimate").set("Content-Type", "application/json").send(JSON.stringify({ content, sweep: false }));
+    const spaced = await agent.post("/api/estimate").set("Content-Type", "application/json").send(JSON.stringify({ content, sweep: false }, null, 2));
+    expect(spaced.status).toBe(200);
+    expect(spaced.body).toEqual(compact.body);
+    const foreign = await agent.post("/api/estimate").set("Origin", "https://elsewhere.example").send({ content });
+    expect(foreign.status).toBe(403);
+    expect((await t.agent().post("/api/estimate").send({ content })).status).toBe(401);
+  });
+
   it("compares designs, with yearly cryogen cost at the given price", async () => {
     const { agent, design: a } = await createAs("engineer", "Panel A", 10);
     const { design: b } = await createAs("engineer", "Panel B", 30);

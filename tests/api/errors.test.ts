@@ -1,16 +1,16 @@
 import express from "express";
-import { pinoHttp } from "pino-http";
 import supertest from "supertest";
 import { describe, expect, it } from "vitest";
 import { errorHandler } from "../../server/middleware/error-handler";
 import { createLogger } from "../../server/logger";
+import { requestLog } from "../../server/middleware/request-log";
 import { parseEnv } from "../../server/env";
 import { startTestApp } from "../support/test-app";
 
 describe("the error middleware", () => {
   it("turns an unknown error into a 500 with a request id and no internals", async () => {
     const app = express();
-    app.use(pinoHttp({ logger: createLogger("silent"), genReqId: () => "req-123" }));
+    app.use(requestLog(createLogger("silent"), { newId: () => "req-123" }));
     app.get("/boom", () => {
       throw new Error("secret table name leaked");
     });
@@ -19,6 +19,7 @@ describe("the error middleware", () => {
     expect(res.status).toBe(500);
     expect(res.body.error.code).toBe("internal");
     expect(res.body.error.requestId).toBe("req-123");
+    expect(res.headers["x-request-id"]).toBe("req-123");
     expect(res.body.error.message).toContain("req-123");
     expect(JSON.stringify(res.body)).not.toContain("secret");
     expect(JSON.stringify(res.body)).not.toMatch(/at .*\.ts/);

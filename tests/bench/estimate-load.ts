@@ -1,6 +1,7 @@
 /**
  * Load benchmark of POST /api/estimate (the live preview), beside a bare Express JSON endpoint
  * in the same process and run, so the ratio shows what sessions, validation and the engine cost.
+ * The estimate route reads its body as text and looks it up in the memo before parsing it.
  * Two bodies, as the design page sends them on every edit: the quick figures (sweep: false) and
  * the whole prediction with its layer-count sweep. Repeated bodies are answered by the estimate
  * memo (server/cache/estimate-memo.ts), so two more runs send a new warm temperature on every
@@ -80,6 +81,9 @@ try {
       },
     ],
   });
+  // A short unmeasured warm-up of both, so neither is timed while the JIT is still compiling it.
+  await run(`http://127.0.0.1:${barePort}/echo`, { ...request(body), duration: 2 });
+  await run(`${stack.origin}/api/estimate`, { ...request(figuresBody), duration: 2 });
   const bareBefore = await run(`http://127.0.0.1:${barePort}/echo`, request(body));
   const figures = await run(`${stack.origin}/api/estimate`, request(figuresBody));
   const estimate = await run(`${stack.origin}/api/estimate`, request(body));
