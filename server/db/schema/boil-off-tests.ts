@@ -2,7 +2,7 @@ import { bigint, boolean, char, double, index, int, mysqlEnum, mysqlTable, text,
 import type { Analysis, LogUploadFields, Series, TimeFormat } from "../../../shared/schemas/boil-off-test";
 import { TEST_METHODS, TEST_STATUSES, VENT_REFERENCES } from "../../../shared/schemas/boil-off-test";
 import { datetimeMs, organizationId, rowId, userReference } from "./columns";
-import { designs } from "./designs";
+import { designReference } from "./designs";
 import { jsonText } from "./json-text";
 
 /** What the test row remembers of its current log: the mapping used and the parsed series object. */
@@ -30,9 +30,7 @@ export const boilOffTests = mysqlTable(
   {
     id: rowId(),
     organizationId: organizationId(),
-    designId: varchar("design_id", { length: 32 })
-      .notNull()
-      .references(() => designs.id, { onDelete: "cascade" }),
+    designId: designReference(),
     revision: int("revision").notNull(),
     stageIndex: int("stage_index").notNull(),
     stageLabel: varchar("stage_label", { length: 120 }).notNull(),

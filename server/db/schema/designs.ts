@@ -24,6 +24,12 @@ export const designs = mysqlTable(
   (t) => [index("designs_org_idx").on(t.organizationId, t.updatedAt)],
 );
 
+/** The design a row belongs to; deleting the design deletes the row. */
+export const designReference = () =>
+  varchar("design_id", { length: 32 })
+    .notNull()
+    .references(() => designs.id, { onDelete: "cascade" });
+
 // A revision is an immutable snapshot: its content, the exact material versions it resolved and
 // the prediction computed then, so a test always points at the prediction that held when it ran.
 export const designRevisions = mysqlTable(
@@ -31,9 +37,7 @@ export const designRevisions = mysqlTable(
   {
     id: rowId(),
     organizationId: organizationId(),
-    designId: varchar("design_id", { length: 32 })
-      .notNull()
-      .references(() => designs.id, { onDelete: "cascade" }),
+    designId: designReference(),
     revision: int("revision").notNull(),
     name: varchar("name", { length: 120 }).notNull(),
     content: jsonText<DesignContent>("content").notNull(),
