@@ -98,17 +98,22 @@ function interpolateTable(points: [number, number][], temperature_K: number): nu
   const last = points.length - 1;
   if (temperature_K <= points[0][0]) return points[0][1];
   if (temperature_K >= points[last][0]) return points[last][1];
-  // Binary search for the segment [lo, lo + 1] holding the temperature.
+  const lo = segmentBelow(points, temperature_K);
+  const [t0, e0] = points[lo];
+  const [t1, e1] = points[lo + 1];
+  return e0 + ((e1 - e0) * (temperature_K - t0)) / (t1 - t0);
+}
+
+/** Binary search: the index lo of the segment [lo, lo + 1] holding a temperature from the first point up to (not at) the last. */
+function segmentBelow(points: [number, number][], temperature_K: number): number {
   let lo = 0;
-  let hi = last;
+  let hi = points.length - 1;
   while (hi - lo > 1) {
     const mid = (lo + hi) >> 1;
     if (points[mid][0] <= temperature_K) lo = mid;
     else hi = mid;
   }
-  const [t0, e0] = points[lo];
-  const [t1, e1] = points[hi];
-  return e0 + ((e1 - e0) * (temperature_K - t0)) / (t1 - t0);
+  return lo;
 }
 
 /**
@@ -122,12 +127,6 @@ export function emissivitySlope(model: Emissivity, temperature_K: number, value 
   const points = model.points;
   const last = points.length - 1;
   if (last === 0 || temperature_K < points[0][0] || temperature_K >= points[last][0]) return 0;
-  let lo = 0;
-  let hi = last;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (points[mid][0] <= temperature_K) lo = mid;
-    else hi = mid;
-  }
-  return (points[hi][1] - points[lo][1]) / (points[hi][0] - points[lo][0]);
+  const lo = segmentBelow(points, temperature_K);
+  return (points[lo + 1][1] - points[lo][1]) / (points[lo + 1][0] - points[lo][0]);
 }
