@@ -1,7 +1,7 @@
 import type { ReflectorFaces } from "./assembly-design";
 import { TORR_PA, type Plan, type PlanBlock } from "./assembly-plan";
 import { blanketCorrelation } from "./blanket-correlation";
-import { estimateLayers, type SpacerModel } from "./blanket-layers";
+import { estimateLayers, type BlanketGas, type BlanketLayersInput, type BlanketLayersResult, type SpacerModel } from "./blanket-layers";
 import { evaluateEmissivity, isConstantModel, type Emissivity } from "./emissivity";
 import { STEFAN_BOLTZMANN_W_PER_M2_K4 as SIGMA } from "./errors";
 import { estimateStack, type StackResistance } from "./radiation-network";
@@ -75,7 +75,7 @@ export function blockHeat(frame: BlockFrame, warm_K: number, cold_K: number): nu
     return factor * estimateStack(stackInput(frame, warm_K, cold_K)).heatLeak_W;
   }
   if (block.model === "correlation") return factor * correlation(frame, block, warm_K, cold_K).heat_W;
-  return factor * estimateLayers(layersInput(frame, block, warm_K, cold_K)).heatLeak_W;
+  return factor * (layersPerArea(frame, block, warm_K, cold_K).heatLeak_W * equivalentArea(frame.place));
 }
 
 /** The block's heat with its parts, layer temperatures and (radiation) resistance ladder. */
@@ -98,12 +98,13 @@ export function blockDetail(frame: BlockFrame, warm_K: number, cold_K: number): 
     const c = correlation(frame, block, warm_K, cold_K);
     return { heat_W: factor * c.heat_W, radiation_W: factor * c.radiation_W, solid_W: factor * c.solid_W, gas_W: factor * c.gas_W, shieldTemperatures_K: null, resistances: null, coldArea_m2 };
   }
-  const r = estimateLayers(layersInput(frame, block, warm_K, cold_K));
+  const r = layersPerArea(frame, block, warm_K, cold_K);
+  const area_m2 = equivalentArea(frame.place);
   return {
-    heat_W: factor * r.heatLeak_W,
-    radiation_W: factor * r.radiation_W,
-    solid_W: factor * r.solid_W,
-    gas_W: factor * r.gas_W,
+    heat_W: factor * (r.heatLeak_W * area_m2),
+    radiation_W: factor * (r.radiation_W * area_m2),
+    solid_W: factor * (r.solid_W * area_m2),
+    gas_W: factor * (r.gas_W * area_m2),
     shieldTemperatures_K: [...r.layerTemperatures_K, ...own],
     resistances: null,
     coldArea_m2,
@@ -191,10 +192,86 @@ function spacerModel(block: PlanBlock): SpacerModel | undefined {
   return { conductivity_W_per_m_K: s.conductivity_W_per_m_K, thickness_m, contactFactor: s.contactFactor };
 }
 
-function layersInput(frame: BlockFrame, block: PlanBlock, warm_K: number, cold_K: number) {
+/**
+ * The layer-by-layer solve of one square metre; a block's heats are these times its equivalent
+ * area. A cylinder's flat ends put the same blanket between the same temperatures as its lateral
+ * wall, so the last few inputs and results are kept and a repeat is answered from them. The
+ * solve is a pure function of its input. Inputs are kept as copies and compared by value: sweeps
+ * change plans in place, and a design's emissivity objects may be edited between estimates.
+ */
+function layersPerArea(frame: BlockFrame, block: PlanBlock, warm_K: number, cold_K: number): BlanketLayersResult {
+  const input = layersInput(frame, block, warm_K, cold_K);
+  for (const kept of recentLayerSolves) if (sameLayersInput(kept.input, input)) return kept.result;
+  const result = estimateLayers(input);
+  recentLayerSolves[nextLayerSolve] = { input: copyLayersInput(input), result };
+  nextLayerSolve = (nextLayerSolve + 1) % RECENT_LAYER_SOLVES;
+  return result;
+}
+
+// A few: the lateral and end solves of one segment and variant follow each other closely.
+const RECENT_LAYER_SOLVES = 8;
+const recentLayerSolves: { input: BlanketLayersInput; result: BlanketLayersResult }[] = [];
+let nextLayerSolve = 0;
+
+function sameLayersInput(a: BlanketLayersInput, b: BlanketLayersInput): boolean {
+  return (
+    a.area_m2 === b.area_m2 &&
+    a.layers === b.layers &&
+    a.warm.temperature_K === b.warm.temperature_K &&
+    a.cold.temperature_K === b.cold.temperature_K &&
+    sameEmissivity(a.warm.emissivity, b.warm.emissivity) &&
+    sameEmissivity(a.cold.emissivity, b.cold.emissivity) &&
+    sameEmissivity(a.reflector.warmSide, b.reflector.warmSide) &&
+    sameEmissivity(a.reflector.coldSide, b.reflector.coldSide) &&
+    sameSpacer(a.spacer, b.spacer) &&
+    sameGas(a.gas, b.gas)
+  );
+}
+
+function copyLayersInput(input: BlanketLayersInput): BlanketLayersInput {
+  const { warm, cold, reflector, spacer, gas } = input;
+  return {
+    ...input,
+    warm: { temperature_K: warm.temperature_K, emissivity: copyEmissivity(warm.emissivity) },
+    cold: { temperature_K: cold.temperature_K, emissivity: copyEmissivity(cold.emissivity) },
+    reflector: { warmSide: copyEmissivity(reflector.warmSide), coldSide: copyEmissivity(reflector.coldSide) },
+    spacer: spacer === undefined ? undefined : { ...spacer },
+    gas: gas === undefined ? undefined : { ...gas, accommodation: gas.accommodation === undefined ? undefined : { ...gas.accommodation } },
+  };
+}
+
+function copyEmissivity(e: Emissivity): Emissivity {
+  if (typeof e === "number") return e;
+  if (e.kind === "power") return { ...e };
+  return { ...e, points: e.points.map(([t, v]) => [t, v]) };
+}
+
+function sameEmissivity(a: Emissivity, b: Emissivity): boolean {
+  if (typeof a === "number" || typeof b === "number") return a === b;
+  if (a.kind === "power" || b.kind === "power") {
+    return a.kind === "power" && b.kind === "power" && a.reference === b.reference && a.referenceTemperature_K === b.referenceTemperature_K && a.exponent === b.exponent;
+  }
+  return a.points.length === b.points.length && a.points.every(([t, e], i) => t === b.points[i][0] && e === b.points[i][1]);
+}
+
+function sameSpacer(a: SpacerModel | undefined, b: SpacerModel | undefined): boolean {
+  if (a === undefined || b === undefined) return a === b;
+  if ("conductance_W_per_m2_K" in a) {
+    return "conductance_W_per_m2_K" in b && a.conductance_W_per_m2_K === b.conductance_W_per_m2_K && a.referenceTemperature_K === b.referenceTemperature_K;
+  }
+  return "conductivity_W_per_m_K" in b && a.conductivity_W_per_m_K === b.conductivity_W_per_m_K && a.thickness_m === b.thickness_m && a.contactFactor === b.contactFactor;
+}
+
+function sameGas(a: BlanketGas | undefined, b: BlanketGas | undefined): boolean {
+  if (a === undefined || b === undefined) return a === b;
+  const accommodation = a.accommodation === undefined || b.accommodation === undefined ? a.accommodation === b.accommodation : a.accommodation.warm === b.accommodation.warm && a.accommodation.cold === b.accommodation.cold;
+  return a.gas === b.gas && a.pressure_Pa === b.pressure_Pa && a.gaugeTemperature_K === b.gaugeTemperature_K && accommodation;
+}
+
+function layersInput(frame: BlockFrame, block: PlanBlock, warm_K: number, cold_K: number): BlanketLayersInput {
   const v = frame.vacuum;
   return {
-    area_m2: equivalentArea(frame.place),
+    area_m2: 1,
     warm: { temperature_K: warm_K, emissivity: frame.warmFace },
     cold: { temperature_K: cold_K, emissivity: frame.coldFace },
     layers: frame.interior,

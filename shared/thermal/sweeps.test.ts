@@ -145,3 +145,45 @@ describe("sweepPressure, sweepLayerDensity, sweepWarmTemperature", () => {
     expect(fieldOf(() => sweepWarmTemperature(cryostat, { from: 300, to: 450, step: 10 }))).toBe("to");
   });
 });
+
+describe("sweeps of layer-by-layer blocks on a cylinder with flat ends", () => {
+  // The ends and the lateral wall solve the same per-area blanket, so recent solves are reused
+  // (block-heat.ts); sweeps change the plan in place, so every point must still be its own design's.
+  const netting = { conductance_W_per_m2_K: 0.04, referenceMeanTemperature_K: 190, referenceLayerDensity_per_cm: 20, layerDensityExponent: 2.6 };
+  const table = (): LayupBlock["reflector"]["warmSide"] => ({ kind: "table", points: [[4.2, 0.015], [77, 0.02], [300, 0.035]] });
+  const layered = (layers: number): LayupBlock => ({ kind: "block", layers, reflector: { warmSide: table(), coldSide: table() }, model: "layers", layerDensity_per_cm: 20, spacer: netting });
+  const design: AssemblyDesign = { ...cryostat, layup: [layered(20), cryostat.layup[1], layered(8)], vacuum: { pressure_Pa: 1e-3, gas: "helium" } };
+  const coldHeat = (d: AssemblyDesign) => estimateAssembly(d).stages[1].heatIn.total_W;
+  const changed = (edit: (copy: AssemblyDesign) => void) => {
+    const copy = structuredClone(design);
+    edit(copy);
+    return copy;
+  };
+
+  it("every point of the layer-density, pressure, warm-temperature and layer-count sweeps is estimateAssembly of that design", () => {
+    // Blanket and supports are summed in another order by the sweeps: agreement to the last few digits.
+    for (const p of sweepLayerDensity(design, { blockIndex: 2, from: 10, to: 40, step: 10 })) {
+      expectClose(p.coldHeat_W, coldHeat(changed((c) => ((c.layup[2] as LayupBlock).layerDensity_per_cm = p.x))), 1e-12);
+    }
+    for (const p of sweepPressure(design, { from: 1e-5, to: 1e-1, pointsPerDecade: 1 })) {
+      expectClose(p.coldHeat_W, coldHeat(changed((c) => (c.vacuum.pressure_Pa = p.x))), 1e-12);
+    }
+    for (const p of sweepWarmTemperature(design, { from: 250, to: 300, step: 25 })) {
+      expectClose(p.heatIntoStages_W[0], estimateAssembly(changed((c) => (c.warm.temperature_K = p.x))).stages[0].heatIn.total_W, 1e-12);
+    }
+    for (const p of sweepLayerCount(design, { blockIndex: 2, from: 2, to: 14, step: 4 })) {
+      expectClose(p.coldHeat_W, coldHeat(withLayers(design, 2, p.x)), 1e-12);
+    }
+  });
+
+  it("an emissivity table edited in place gives the new answer, not a kept one", () => {
+    const copy = structuredClone(design);
+    const before = coldHeat(copy);
+    const face = (copy.layup[2] as LayupBlock).reflector.coldSide as { points: [number, number][] };
+    face.points[0][1] = 0.03;
+    const after = coldHeat(copy);
+    expect(after).toBeGreaterThan(before);
+    expect(after).toBe(coldHeat(structuredClone(copy)));
+    expect(coldHeat(design)).toBe(before);
+  });
+});
