@@ -1,22 +1,17 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { ROLES, type Role } from "../../shared/permissions";
 import { AlertSchema, DEFAULT_ALERT_THRESHOLD } from "../../shared/schemas/alert";
 import { CalibrationSchema } from "../../shared/schemas/boil-off-test";
 import { createDesign, createTest, panelContent, uploadLog, WEIGHING_FIELDS, weighingLog, type Agent } from "../support/boil-off";
 import { countRows } from "../support/database";
-import { linkIn, startTestApp, tokenOf, type TestApp } from "../support/test-app";
+import { linkIn, tokenOf, useTestApp } from "../support/test-app";
 
 /**
  * Alerts (an accepted test over the organization's threshold mails the design's engineers and
  * the owners, and stays open until acknowledged), the threshold setting, and calibration from
  * accepted tests.
  */
-let t: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-});
-afterAll(async () => t.stop());
-beforeEach(async () => t.reset());
+const t = useTestApp();
 
 // Saturated nitrogen at 1 atm, NIST Chemistry WebBook (Span et al. 2000), as shared/thermal/fluids.ts carries it.
 const slopeFor = (heat_W: number) => -(heat_W * (1 - 4.6079 / 806.08)) / 199_180;

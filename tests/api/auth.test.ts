@@ -1,16 +1,11 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { ErrorBodySchema } from "../../shared/schemas/common";
 import { MeSchema } from "../../shared/schemas/auth";
 import { DEMO_PASSWORD } from "../../server/db/seed/demo";
 import { countRows } from "../support/database";
-import { linkIn, startTestApp, tokenOf, type TestApp } from "../support/test-app";
+import { linkIn, startTestApp, tokenOf, useTestApp } from "../support/test-app";
 
-let t: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-});
-afterAll(async () => t.stop());
-beforeEach(async () => t.reset());
+const t = useTestApp();
 
 const newAccount = { name: "Iris Vance", email: "Iris@Northfen.example", password: "a-long-password-1", organizationName: "Northfen Cryo Lab" };
 

@@ -1,18 +1,13 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { AnalysisSchema, TestDetailSchema, type Analysis } from "../../shared/schemas/boil-off-test";
 import { createDesign, createTest, gaussian, uploadLog, WEIGHING_FIELDS, type Agent } from "../support/boil-off";
-import { startTestApp, type TestApp } from "../support/test-app";
+import { useTestApp } from "../support/test-app";
 
 /**
  * The barometric correction through the front door: an invented weighing log with a known
  * boil-off and a barometer rising at a known rate, with and without the vessel's tare mass.
  */
-let t: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-});
-afterAll(async () => t?.stop());
-beforeEach(async () => t.reset());
+const t = useTestApp();
 
 // Saturated nitrogen at 1 atm: NIST Chemistry WebBook, Thermophysical Properties of Fluid
 // Systems, the values shared/thermal/fluids.ts carries (marked there as from memory). Typed out

@@ -1,17 +1,12 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { AlertSchema } from "../../shared/schemas/alert";
 import { SeriesSchema, TestDetailSchema, TestSummarySchema } from "../../shared/schemas/boil-off-test";
 import { seedDemoDesigns } from "../../server/services/demo-designs";
 import { seedDemoTests } from "../../server/services/demo-tests";
-import { startTestApp, type TestApp } from "../support/test-app";
+import { useTestApp } from "../support/test-app";
 
 /** The demo seed `npm start` runs: PRODUCT.md's "a few boil-off tests, one of which runs 40 % over its prediction". */
-let t: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-});
-afterAll(async () => t.stop());
-beforeEach(async () => t.reset());
+const t = useTestApp();
 
 describe("the demo boil-off tests", () => {
   it("seeds three tests on the demo designs, one 40 % over its prediction with an open alert, once", async () => {

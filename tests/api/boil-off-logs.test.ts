@@ -1,25 +1,16 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { AnalysisSchema, LogPreviewSchema, SeriesSchema, SERIES_MAX_POINTS, TestDetailSchema } from "../../shared/schemas/boil-off-test";
 import { createDesign, createTest, gaussian, sha256, storedState, uploadLog, WEIGHING_FIELDS, weighingLog, type Agent } from "../support/boil-off";
-import { startTestApp, type TestApp } from "../support/test-app";
+import { useTestApp } from "../support/test-app";
 
 /**
  * Logger files through the front door: upload, parse, store (file and parsed series in the S3
  * fake, each with its SHA-256), fit, and every kind of broken file refused with its line or
  * field named and nothing stored.
  */
-let t: TestApp;
-/** The same database behind an app whose log limit is 4 KiB, for the size-limit case. */
-let small: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-  small = await startTestApp({ LOG_MAX_BYTES: "4096" });
-});
-afterAll(async () => {
-  await small?.stop();
-  await t?.stop();
-});
-beforeEach(async () => t.reset());
+const t = useTestApp();
+/** The same database behind an app whose log limit is 4 KiB, for the size-limit case; `t` resets it. */
+const small = useTestApp({ env: { LOG_MAX_BYTES: "4096" }, reset: false });
 
 // Saturated nitrogen at 1 atm: NIST Chemistry WebBook, Thermophysical Properties of Fluid
 // Systems (Span et al. 2000 equation of state), the values shared/thermal/fluids.ts carries

@@ -1,16 +1,11 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { ROLES, type Role } from "../../shared/permissions";
 import { AnalysisSchema, SeriesSchema, StoredFileSchema, TestDetailSchema, TestSummarySchema } from "../../shared/schemas/boil-off-test";
 import { createDesign, createTest, sha256, storedState, uploadLog, WEIGHING_FIELDS, weighingLog } from "../support/boil-off";
 import { countRows } from "../support/database";
-import { startTestApp, type TestApp } from "../support/test-app";
+import { useTestApp } from "../support/test-app";
 
-let t: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-});
-afterAll(async () => t.stop());
-beforeEach(async () => t.reset());
+const t = useTestApp();
 
 // The smallest real PNG (1×1, one grey pixel) and a PDF header: attachments are sniffed by their first bytes.
 const PNG = Buffer.from("89504e470d0a1a0a0000000d4948445200000001000000010802000000907753de0000000c4944415408d763f8ffff3f0005fe02fea7d6a4bb0000000049454e44ae426082", "hex");

@@ -1,15 +1,10 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { ROLES } from "../../shared/permissions";
 import { CryogenListSchema } from "../../shared/schemas/cryogen";
 import { CRYOGEN_IDS, CRYOGENS, ventedGasFactor } from "../../shared/thermal/fluids";
-import { startTestApp, type TestApp } from "../support/test-app";
+import { useTestApp } from "../support/test-app";
 
-let t: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-});
-afterAll(async () => t.stop());
-beforeEach(async () => t.reset());
+const t = useTestApp();
 
 // Invented values for an organization's own nitrogen entry: a test of scoping, not of data.
 const ownNitrogen = {

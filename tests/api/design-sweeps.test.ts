@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { toAssembly } from "../../shared/design/to-assembly";
 import { ROLES } from "../../shared/permissions";
 import { DesignContentSchema, SweepResultSchema, type DesignContentInput, type SweepResult } from "../../shared/schemas/design";
@@ -6,14 +6,9 @@ import { CRYOGENS } from "../../shared/thermal/fluids";
 import { sweepLayerDensity, sweepPressure, sweepWarmTemperature, type SweepPoint } from "../../shared/thermal/sweeps";
 import { resolveDesignMaterials } from "../../server/services/design-materials";
 import { libraryRef, panelContent } from "../support/designs";
-import { startTestApp, type TestApp } from "../support/test-app";
+import { useTestApp, type TestApp } from "../support/test-app";
 
-let t: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-});
-afterAll(async () => t.stop());
-beforeEach(async () => t.reset());
+const t = useTestApp();
 
 type Agent = ReturnType<TestApp["agent"]>;
 

@@ -1,17 +1,12 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { predictDesign } from "../../shared/design/predict";
 import { DesignContentSchema, DesignDetailSchema, RevisionDetailSchema, type DesignContentInput } from "../../shared/schemas/design";
 import { resolveDesignMaterials } from "../../server/services/design-materials";
 import { countRows } from "../support/database";
 import { libraryRef, panelContent } from "../support/designs";
-import { startTestApp, type TestApp } from "../support/test-app";
+import { useTestApp } from "../support/test-app";
 
-let t: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-});
-afterAll(async () => t.stop());
-beforeEach(async () => t.reset());
+const t = useTestApp();
 
 const ref = async (materialId: string) => libraryRef(await t.signInAs("viewer"), materialId);
 

@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { librarySeedEntries, seedLibrary } from "../../server/db/seed/library";
 import { materialVersions } from "../../server/db/schema";
 import { newId } from "../../server/ids";
@@ -11,15 +11,10 @@ import { CORRELATION_SETS } from "../../shared/thermal/blanket-correlation";
 import { CRYOGENS } from "../../shared/thermal/fluids";
 import { SUPPORT_MATERIALS } from "../../shared/thermal/supports";
 import { countRows } from "../support/database";
-import { startTestApp, type TestApp } from "../support/test-app";
+import { useTestApp, type TestApp } from "../support/test-app";
 
 type Agent = ReturnType<TestApp["agent"]>;
-let t: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-});
-afterAll(async () => t.stop());
-beforeEach(async () => t.reset());
+const t = useTestApp();
 
 const fixture = (name: string) => readFileSync(path.resolve("tests/fixtures/materials", name));
 const SEED_COUNT = librarySeedEntries().length;

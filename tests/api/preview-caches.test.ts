@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { DEMO_PASSWORD, DEMO_USERS } from "../../server/db/seed/demo";
 import type { Role } from "../../shared/permissions";
 import type { DesignContentInput, MaterialRef } from "../../shared/schemas/design";
@@ -6,18 +6,13 @@ import { MaterialDetailSchema, type MaterialDetail } from "../../shared/schemas/
 import { TeamSchema } from "../../shared/schemas/team";
 import { countRows } from "../support/database";
 import { panelContent } from "../support/designs";
-import { linkIn, startTestApp, tokenOf, type TestApp } from "../support/test-app";
+import { linkIn, tokenOf, useTestApp, type TestApp } from "../support/test-app";
 
 // The live preview's caches (server/cache): every test fills them with a first request, changes
 // something, and shows that the very next request already sees the change.
 
 type Agent = ReturnType<TestApp["agent"]>;
-let t: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-});
-afterAll(async () => t.stop());
-beforeEach(async () => t.reset());
+const t = useTestApp();
 
 /** A flat panel between a 300 K wall and liquid nitrogen, with one radiation block. */
 const panel = async (): Promise<DesignContentInput> => panelContent(await t.signInAs("viewer"));

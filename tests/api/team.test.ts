@@ -1,15 +1,10 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { ROLES, type Role } from "../../shared/permissions";
 import { TeamSchema } from "../../shared/schemas/team";
 import { countRows } from "../support/database";
-import { linkIn, startTestApp, tokenOf, type TestApp } from "../support/test-app";
+import { linkIn, tokenOf, useTestApp } from "../support/test-app";
 
-let t: TestApp;
-beforeAll(async () => {
-  t = await startTestApp();
-});
-afterAll(async () => t.stop());
-beforeEach(async () => t.reset());
+const t = useTestApp();
 
 async function memberId(email: string): Promise<string> {
   const owner = await t.signInAs("owner");

@@ -3,7 +3,7 @@ import { mkdtemp, rm } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
 import supertest from "supertest";
-import { inject } from "vitest";
+import { afterAll, beforeAll, beforeEach, inject } from "vitest";
 import { createApp } from "../../server/app";
 import { buildContext } from "../../server/bootstrap";
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from "../../server/db/seed/demo";
@@ -89,6 +89,37 @@ export async function startTestApp(envOverrides: Record<string, string> = {}) {
   };
 }
 export type TestApp = Awaited<ReturnType<typeof startTestApp>>;
+
+export interface UseTestAppOptions {
+  /** Passed to startTestApp as its environment overrides. */
+  env?: Parameters<typeof startTestApp>[0];
+  /** Reset the database before each test (default). Off for a second app sharing another's database. */
+  reset?: boolean;
+}
+
+/**
+ * Registers a file's app lifecycle: start in beforeAll, stop in afterAll, reset in beforeEach.
+ * Before-hooks run in registration order (after-hooks in reverse), so a file's own beforeEach comes after this reset.
+ * The app exists only once beforeAll has run, so the handle forwards to it: tests keep writing
+ * `t.agent()` and `t.ctx.db`, and a use at file load fails loudly rather than on undefined.
+ */
+export function useTestApp(options: UseTestAppOptions = {}): TestApp {
+  let app: TestApp | undefined;
+  beforeAll(async () => {
+    app = await startTestApp(options.env);
+  });
+  // Optional so a failed start reports its own error, not a second one from here.
+  afterAll(async () => app?.stop());
+  if (options.reset ?? true) beforeEach(async () => app!.reset());
+
+  return new Proxy({} as TestApp, {
+    get(_, key) {
+      if (!app) throw new Error(`useTestApp: read "${String(key)}" before beforeAll started the app; use it inside a test or hook`);
+      const value: unknown = Reflect.get(app, key);
+      return typeof value === "function" ? value.bind(app) : value;
+    },
+  });
+}
 
 /** The first link in a caught message's text. */
 export function linkIn(text: string, path: string): string {
