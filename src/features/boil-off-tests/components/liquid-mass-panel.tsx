@@ -11,7 +11,7 @@ import { formatNumber, formatQuantity } from "../../../lib/format-quantity";
 import { useUnitSystem } from "../../../lib/unit-system";
 import { useUpdateLiquidMass, type LiquidMassPatch } from "../api/update-liquid-mass";
 import { LIQUID_MASS_FIGURES, LIQUID_MASS_TITLE, liquidMassFieldId, needsLiquidMassFigure, type LiquidMassMethod } from "../utils/liquid-mass";
-import { QuantityInput } from "./quantity-input";
+import { QuantityInput } from "../../../components/quantity-input";
 
 const WHY: Record<LiquidMassMethod, string> = {
   weighing: "The scale weighs the vessel with its liquid, so the liquid is the reading less the empty vessel's mass (its tare).",

@@ -12,7 +12,7 @@ import { useUnitSystem } from "../../../lib/unit-system";
 import { useCreateTest } from "../api/create-test";
 import { useDesignChoices, useDesignRevisions, useRevisionStages } from "../api/get-design-choices";
 import { METHOD_HINTS, METHOD_LABELS } from "../utils/method-text";
-import { QuantityInput } from "./quantity-input";
+import { QuantityInput } from "../../../components/quantity-input";
 
 const FIELDS = ["designId", "revision", "stageIndex", "method", "vesselLabel", "ventReference", "ambientTemperature_K", "ambientPressure_Pa", "notes", "capacity_L", "fullScale_mm", "tareMass_kg", "fillFraction"] as const;
 

@@ -1,19 +1,10 @@
-import { createColumnHelper, type RowData } from "@tanstack/react-table";
+import { createColumnHelper } from "@tanstack/react-table";
 import type { ReactNode } from "react";
 import type { DesignSummary } from "../../../../shared/schemas/design";
 import type { UnitSystem } from "../../../../shared/units";
 import { TextLink } from "../../../components/ui/text-link";
 import { formatQuantity } from "../../../lib/format-quantity";
 import { formatDateTime } from "../../../lib/format-time";
-
-declare module "@tanstack/react-table" {
-  // Numbers align right; the table reads this per column. The augmentation must repeat the
-  // library's own type parameters, used or not.
-  // eslint-disable-next-line @typescript-eslint/no-unused-vars
-  interface ColumnMeta<TData extends RowData, TValue> {
-    numeric?: boolean;
-  }
-}
 
 const col = createColumnHelper<DesignSummary>();
 // Empty heat (no prediction yet) sorts last whatever the direction.

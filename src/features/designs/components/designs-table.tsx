@@ -1,5 +1,4 @@
 import {
-  flexRender,
   getCoreRowModel,
   getFilteredRowModel,
   getSortedRowModel,
@@ -10,6 +9,7 @@ import {
 } from "@tanstack/react-table";
 import { useMemo, useState, type ReactNode } from "react";
 import type { DesignSummary } from "../../../../shared/schemas/design";
+import { DataTable } from "../../../components/ui/data-table";
 import { TextField } from "../../../components/ui/field";
 import { useUnitSystem } from "../../../lib/unit-system";
 import { designColumns } from "./designs-columns";
@@ -24,8 +24,6 @@ type DesignsTableProps = {
   /** The selection bar: what to do with the picked rows (compare 2–6). */
   selectionActions: (picked: DesignSummary[]) => ReactNode;
 };
-
-const SORT_WORDS = { asc: "ascending", desc: "descending" } as const;
 
 /** The designs list: sortable columns, a vessel filter, and row picks for Compare. */
 export function DesignsTable({ designs, hrefOf, rowActions, selectionActions }: DesignsTableProps) {
@@ -67,44 +65,7 @@ export function DesignsTable({ designs, hrefOf, rowActions, selectionActions }: 
           {selectionActions(picked)}
         </div>
       </div>
-      <div className="overflow-x-auto">
-        <table className="w-full text-sm">
-          <caption className="sr-only">Designs</caption>
-          <thead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id} className="text-left text-xs uppercase tracking-wider text-ink-300">
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  return (
-                    <th key={header.id} scope="col" aria-sort={sorted ? SORT_WORDS[sorted] : undefined} className={`pb-2 pr-4 font-medium ${header.column.columnDef.meta?.numeric ? "text-right" : ""}`}>
-                      {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase hover:text-ink-50">
-                          {flexRender(header.column.columnDef.header, header.getContext())}
-                          <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
-                        </button>
-                      ) : (
-                        flexRender(header.column.columnDef.header, header.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className={`border-t border-ink-800 align-top ${row.getIsSelected() ? "bg-ink-800/60" : ""}`}>
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={`py-2.5 pr-4 ${cell.column.columnDef.meta?.numeric ? "text-right font-mono" : ""}`}>
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-        {table.getRowModel().rows.length === 0 ? <p className="py-6 text-sm text-ink-300">No design matches.</p> : null}
-      </div>
+      <DataTable table={table} caption="Designs" empty="No design matches." rowClassName={(row) => (row.getIsSelected() ? "bg-ink-800/60" : "")} />
     </div>
   );
 }

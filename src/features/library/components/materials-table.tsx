@@ -1,9 +1,8 @@
-import { flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState, type Table, type VisibilityState } from "@tanstack/react-table";
+import { getCoreRowModel, getSortedRowModel, useReactTable, type SortingState, type Table, type VisibilityState } from "@tanstack/react-table";
 import { useState } from "react";
 import type { MaterialSummary } from "../../../../shared/schemas/material";
+import { DataTable } from "../../../components/ui/data-table";
 import { materialColumns } from "./material-columns";
-
-const SORT_WORDS = { asc: "ascending", desc: "descending" } as const;
 
 /** Show or hide columns; the name always stays, so every row can still be opened. */
 function ColumnPicker({ table }: { table: Table<MaterialSummary> }) {
@@ -48,40 +47,7 @@ export function MaterialsTable({ materials, toolbar }: { materials: MaterialSumm
         {toolbar}
         <ColumnPicker table={table} />
       </div>
-      <div className="overflow-x-auto">
-        <table className="w-full text-sm">
-          <caption className="sr-only">Library entries; select a column header to sort</caption>
-          <thead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id} className="text-left text-xs uppercase tracking-wider text-ink-300">
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  return (
-                    <th key={header.id} scope="col" className="pb-2 pr-4 font-medium" aria-sort={sorted ? SORT_WORDS[sorted] : undefined}>
-                      <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase hover:text-ink-50">
-                        {flexRender(header.column.columnDef.header, header.getContext())}
-                        <span aria-hidden="true" className="w-3 text-frost-300">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : ""}</span>
-                      </button>
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-t border-ink-800 align-top">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="py-2.5 pr-4 text-ink-200">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-        {materials.length === 0 ? <p className="py-6 text-sm text-ink-300">No entries match these filters.</p> : null}
-      </div>
+      <DataTable table={table} caption="Library entries; select a column header to sort" empty="No entries match these filters." />
     </div>
   );
 }

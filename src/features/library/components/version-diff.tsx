@@ -1,5 +1,6 @@
 import { useState } from "react";
 import type { MaterialVersion } from "../../../../shared/schemas/material";
+import { ChangesTable } from "../../../components/ui/changes-table";
 import { SelectField } from "../../../components/ui/field";
 import { diffVersions } from "../utils/diff-versions";
 
@@ -35,30 +36,12 @@ export function VersionDiff({ versions }: { versions: MaterialVersion[] }) {
           Versions {a.version} and {b.version} carry the same values.
         </p>
       ) : (
-        <table className="w-full text-sm">
-          <caption className="sr-only">
-            Fields changed from version {a.version} to version {b.version}
-          </caption>
-          <thead>
-            <tr className="text-left text-xs uppercase tracking-wider text-ink-300">
-              <th scope="col" className="pb-2 pr-4 font-medium">Field</th>
-              <th scope="col" className="pb-2 pr-4 font-medium">Version {a.version}</th>
-              <th scope="col" className="pb-2 font-medium">Version {b.version}</th>
-            </tr>
-          </thead>
-          <tbody>
-            {changes.map((c) => (
-              <tr key={c.field} className="border-t border-ink-800 align-top">
-                <th scope="row" className="py-2 pr-4 text-left font-mono text-xs font-normal text-ink-200">{c.field}</th>
-                <td className="py-2 pr-4 text-ink-300 line-through decoration-ink-500">{c.from}</td>
-                <td className="py-2 text-ink-50">
-                  <span aria-hidden="true">→ </span>
-                  {c.to}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <ChangesTable
+          caption={`Fields changed from version ${a.version} to version ${b.version}`}
+          fromLabel={`Version ${a.version}`}
+          toLabel={`Version ${b.version}`}
+          changes={changes.map((c) => ({ key: c.field, field: c.field, from: c.from, to: c.to }))}
+        />
       )}
     </div>
   );

@@ -1,56 +1,9 @@
-import { useState } from "react";
-import { useController, useFormContext, type FieldPath } from "react-hook-form";
+import { useFormContext } from "react-hook-form";
 import type { DesignContentInput } from "../../../../../shared/schemas/design";
-import { unitLabel, type QuantityKind, type UnitSystem } from "../../../../../shared/units";
-import { TextField } from "../../../../components/ui/field";
-import { inputText, localizeRange, parseInput } from "../../../../lib/format-quantity";
-import { useUnitSystem } from "../../../../lib/unit-system";
+import { QuantityInput, type QuantityInputProps } from "../../../../components/quantity-input";
 
-type QuantityFieldProps = {
-  name: FieldPath<DesignContentInput>;
-  label: string;
-  /** The quantity, for unit conversion; null for pure numbers (counts, fractions, factors). */
-  kind: QuantityKind | null;
-  /** The unit words of a pure number, e.g. "layers". */
-  suffix?: string;
-  hint?: string;
-  /** What an emptied input means: undefined for a required number, null for an optional one. */
-  empty?: null | undefined;
-  disabled?: boolean;
-};
-
-/**
- * A number typed in the user's unit system while the form keeps SI. The typed text is kept as
- * typed (a half-written "0." or a wrong "abc" stays on screen); it is re-derived from the form's
- * value only when that value changes from elsewhere (a reset, a unit switch).
- */
-export function QuantityField({ name, label, kind, suffix, hint, empty = undefined, disabled }: QuantityFieldProps) {
+/** A quantity of the design form, which reaches its control through the form's context. */
+export function QuantityField(props: Omit<QuantityInputProps<DesignContentInput>, "control" | "id">) {
   const { control } = useFormContext<DesignContentInput>();
-  // Taken apart: the compiler treats an object holding a ref as a ref, and would refuse the rest.
-  const { field: { ref, value: fieldValue, onChange, onBlur, name: fieldName }, fieldState } = useController({ control, name });
-  const system = useUnitSystem();
-  const [draft, setDraft] = useState<{ text: string; value: unknown; system: UnitSystem } | null>(null);
-  const text = draft && Object.is(draft.value, fieldValue) && draft.system === system ? draft.text : inputText(kind, fieldValue, system);
-  const unit = kind ? unitLabel(kind, system) : suffix;
-  const error = fieldState.error?.message;
-
-  return (
-    <TextField
-      label={unit ? `${label} (${unit})` : label}
-      inputMode="decimal"
-      autoComplete="off"
-      name={fieldName}
-      ref={ref}
-      value={text}
-      disabled={disabled}
-      onBlur={onBlur}
-      onChange={(event) => {
-        const value = parseInput(kind, event.target.value, system, empty);
-        setDraft({ text: event.target.value, value, system });
-        onChange(value);
-      }}
-      hint={hint}
-      error={error ? localizeRange(error, kind, system) : undefined}
-    />
-  );
+  return <QuantityInput control={control} {...props} />;
 }

@@ -2,6 +2,7 @@ import { useState } from "react";
 import type { RevisionDetail, RevisionSummary } from "../../../../../shared/schemas/design";
 import type { UnitSystem } from "../../../../../shared/units";
 import { ErrorMessage } from "../../../../components/errors/error-message";
+import { ChangesTable } from "../../../../components/ui/changes-table";
 import { SelectField } from "../../../../components/ui/field";
 import { Loading } from "../../../../components/ui/spinner";
 import { formatQuantity } from "../../../../lib/format-quantity";
@@ -27,25 +28,12 @@ function Changes({ before, after }: { before: RevisionDetail; after: RevisionDet
   const changes = diffContent(before.content, after.content);
   if (changes.length === 0) return <p className="text-sm text-ink-300">The two revisions have the same inputs.</p>;
   return (
-    <table className="w-full text-sm">
-      <caption className="sr-only">Inputs changed from revision {before.revision} to revision {after.revision}</caption>
-      <thead>
-        <tr className="text-left text-xs uppercase tracking-wider text-ink-300">
-          <th scope="col" className="pb-2 pr-3 font-medium">Field</th>
-          <th scope="col" className="pb-2 pr-3 font-medium">Revision {before.revision}</th>
-          <th scope="col" className="pb-2 font-medium">Revision {after.revision}</th>
-        </tr>
-      </thead>
-      <tbody>
-        {changes.map((c) => (
-          <tr key={c.path} className="border-t border-ink-800 align-top">
-            <th scope="row" className="py-1.5 pr-3 text-left font-normal text-ink-200">{readablePath(c.path)}</th>
-            <td className="py-1.5 pr-3 font-mono text-xs text-ink-300 line-through decoration-ink-500">{show(c.before, c.path, names, system)}</td>
-            <td className="py-1.5 font-mono text-xs text-ink-50">→ {show(c.after, c.path, names, system)}</td>
-          </tr>
-        ))}
-      </tbody>
-    </table>
+    <ChangesTable
+      caption={`Inputs changed from revision ${before.revision} to revision ${after.revision}`}
+      fromLabel={`Revision ${before.revision}`}
+      toLabel={`Revision ${after.revision}`}
+      changes={changes.map((c) => ({ key: c.path, field: readablePath(c.path), from: show(c.before, c.path, names, system), to: show(c.after, c.path, names, system) }))}
+    />
   );
 }
 
