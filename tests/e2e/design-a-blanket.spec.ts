@@ -102,6 +102,10 @@ test("the engineer designs a two-stage helium cryostat, saves it, compares it an
   await dialog.getByRole("button", { name: "Save revision" }).click();
   await expect(page.getByText("Revision 2 of 2")).toBeVisible();
   await expect(page.getByRole("table", { name: "Revisions, newest first" })).toContainText("Five more layers on the cold block");
+  // What changed from revision 1 to 2: the cold block's layer count and nothing else, old → new.
+  const changes = page.getByRole("table", { name: "Inputs changed from revision 1 to revision 2" });
+  await expect(changes.getByRole("row")).toHaveCount(2);
+  await expect(changes.getByRole("row").filter({ hasText: "layers" })).toContainText(/30.*→ 35/);
 
   // The report of the shown revision: a real PDF that names the design.
   const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "PDF report" }).click()]);

@@ -40,7 +40,7 @@ export function VersionDiff({ versions }: { versions: MaterialVersion[] }) {
           caption={`Fields changed from version ${a.version} to version ${b.version}`}
           fromLabel={`Version ${a.version}`}
           toLabel={`Version ${b.version}`}
-          changes={changes.map((c) => ({ key: c.field, field: c.field, from: c.from, to: c.to }))}
+          changes={changes.map((c) => ({ key: c.field, ...c }))}
         />
       )}
     </div>
