@@ -46,7 +46,7 @@ export function kindOfPath(path: string): QuantityKind | null {
   return SUFFIX_KINDS.find(([re]) => re.test(leaf))?.[1] ?? null;
 }
 
-/** "layup.2.layers" → "Layup item 3 · layers": people count from 1. */
+/** "layup.2.layers" → "layup · item 3 · layers": people count from 1. */
 export function readablePath(path: string): string {
   return path
     .split(".")
